@@ -1,0 +1,81 @@
+import { spawn } from 'node:child_process';
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { dirname, join } from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { loadConfig } from '../server/config';
+import { createSequelize } from '../server/db';
+import { migrateUp } from '../server/migrator';
+import { buildClientIfStale } from './lib/build-client';
+import { ensureDebianPackage } from './lib/debian';
+import { dropDatabases, ensureDatabase, mariaInstance, startMaria, stopMaria } from './lib/mariadb';
+import { TEST_DB_PORT, TEST_WORKERS, testDatabases, testEnvironment } from './lib/test-env';
+
+const root = join(dirname(fileURLToPath(import.meta.url)), '..');
+
+/**
+ * npm test: a private MariaDB on its own port with fresh databases (one per worker),
+ * migrations, the built client, Chromium; then every vitest project (unit, api, browser),
+ * and a closing "N passed, N failed" line read from vitest's JSON report.
+ */
+async function main(): Promise<number> {
+  const env = testEnvironment();
+  Object.assign(process.env, env);
+  ensureDebianPackage('chromium', 'chromium', ['/usr/bin/chromium']);
+
+  const instance = mariaInstance(root, 'mariadb-test', TEST_DB_PORT);
+  console.log(`test: MariaDB on 127.0.0.1:${TEST_DB_PORT} (data in ${instance.dataDir})`);
+  const { startedHere } = await startMaria(instance);
+  try {
+    const databases = testDatabases();
+    dropDatabases(instance, databases);
+    ensureDatabase(instance, { databases, user: env.DB_USER, password: env.DB_PASSWORD });
+    for (const name of databases) {
+      const sequelize = createSequelize(loadConfig({ ...process.env, DB_NAME: name }));
+      await migrateUp(sequelize);
+      await sequelize.close();
+    }
+    console.log(`test: migrated ${databases.join(', ')}`);
+    rmSync(join(root, env.DATA_DIR), { recursive: true, force: true });
+    buildClientIfStale(root);
+    return await runVitest(process.argv.slice(2));
+  } finally {
+    if (startedHere) await stopMaria(instance);
+  }
+}
+
+function runVitest(extraArgs: string[]): Promise<number> {
+  const report = join(root, 'test-results', 'vitest.json');
+  mkdirSync(dirname(report), { recursive: true });
+  rmSync(report, { force: true });
+  const args = ['run', `--maxWorkers=${TEST_WORKERS}`, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extraArgs];
+  return new Promise((resolve) => {
+    const child = spawn(join(root, 'node_modules', '.bin', 'vitest'), args, { cwd: root, stdio: 'inherit', env: process.env });
+    child.on('exit', (code) => {
+      const summary = readSummary(report);
+      console.log('');
+      if (!summary) {
+        console.log('0 passed, 1 failed (vitest wrote no report)');
+        return resolve(1);
+      }
+      console.log(`${summary.passed} passed, ${summary.failed} failed`);
+      resolve(summary.failed > 0 || summary.passed === 0 || code !== 0 ? 1 : 0);
+    });
+  });
+}
+
+function readSummary(path: string): { passed: number; failed: number } | null {
+  if (!existsSync(path)) return null;
+  const json = JSON.parse(readFileSync(path, 'utf8')) as { numPassedTests: number; numFailedTests: number; testResults?: { status: string }[] };
+  // A file that failed to load counts as a failure even though it ran no test.
+  const brokenFiles = (json.testResults ?? []).filter((f) => f.status === 'failed').length;
+  return { passed: json.numPassedTests, failed: Math.max(json.numFailedTests, json.numFailedTests === 0 ? brokenFiles : 0) };
+}
+
+main().then(
+  (code) => process.exit(code),
+  (error) => {
+    console.error(`test: ${error instanceof Error ? error.message : error}`);
+    console.log('0 passed, 1 failed');
+    process.exit(1);
+  },
+);

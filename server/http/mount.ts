@@ -1,0 +1,88 @@
+import type { Express, NextFunction, Request, RequestHandler, Response } from 'express';
+import { can } from '../../shared/permissions';
+import { badRequest, forbidden, unauthorized, unsupportedMediaType } from '../errors';
+import { recordAudit } from '../services/audit';
+import { currentUser } from './authenticate';
+import type { AppDeps, HandlerContext, LimiterName, RouteSpec } from './route';
+import { parseOrThrow } from './validate';
+
+type Limiters = Record<LimiterName, RequestHandler>;
+
+/**
+ * Turns each declaration into one Express route whose pipeline always reads:
+ * rate limits → authenticate → authorise (role) → upload → validate → transaction → handler.
+ */
+export function mountRoutes(app: Express, specs: RouteSpec[], deps: AppDeps, limiters: Limiters) {
+  for (const spec of specs) {
+    const chain: RequestHandler[] = (spec.limiters ?? []).map((name) => limiters[name]);
+    chain.push(authenticateAndAuthorise(spec, deps));
+    if (spec.upload) chain.push(spec.upload(deps));
+    chain.push(runHandler(spec, deps));
+    app[spec.method](spec.path, ...chain);
+  }
+}
+
+function authenticateAndAuthorise(spec: RouteSpec, deps: AppDeps): RequestHandler {
+  return async (req, res, next) => {
+    try {
+      const user = await currentUser(deps.config, req, res);
+      if (spec.access !== 'public') {
+        if (!user) throw unauthorized();
+        if (spec.access !== 'signedIn' && !can(user.role, spec.access)) throw forbidden();
+      }
+      res.locals.user = user;
+      next();
+    } catch (error) {
+      next(error);
+    }
+  };
+}
+
+function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
+  const transactional = spec.transactional ?? spec.method !== 'get';
+  return async (req: Request, res: Response, next: NextFunction) => {
+    try {
+      const params = spec.params ? parseOrThrow(spec.params, req.params, 'params') : undefined;
+      const query = spec.query ? parseOrThrow(spec.query, req.query, 'query') : undefined;
+      const body = spec.body && !spec.upload ? parseJsonBody(spec, req) : spec.upload ? req.body : undefined;
+      const tasks: (() => Promise<void>)[] = [];
+      const ctx: HandlerContext<unknown, unknown, unknown> = {
+        req,
+        res,
+        user: res.locals.user ?? null,
+        body,
+        query,
+        params,
+        transaction: null,
+        deps,
+        ip: req.ip ?? '',
+        audit: (event) =>
+          recordAudit({ actorId: ctx.user?.id ?? null, ip: ctx.ip, ...event }, ctx.transaction ?? undefined),
+        afterCommit: (task) => void tasks.push(task),
+      };
+      const reply = transactional
+        ? await deps.sequelize.transaction(async (transaction) => {
+            ctx.transaction = transaction;
+            return spec.handler(ctx);
+          })
+        : await spec.handler(ctx);
+      ctx.transaction = null;
+      for (const task of tasks) {
+        // The write is committed: a failed side effect (mail) is logged, never undoes it.
+        await task().catch((error: Error) => console.warn(`after-commit task failed: ${error.message}`));
+      }
+      if (reply && !res.headersSent) res.status(reply.status ?? 200).json(reply.body ?? null);
+    } catch (error) {
+      next(error);
+    }
+  };
+}
+
+function parseJsonBody(spec: RouteSpec, req: Request) {
+  const hasBody = Number(req.headers['content-length'] ?? 0) > 0 || req.headers['transfer-encoding'] !== undefined;
+  if (hasBody && !req.is('application/json')) throw unsupportedMediaType();
+  if (req.body === undefined || req.body === null || typeof req.body !== 'object' || Array.isArray(req.body)) {
+    throw badRequest('body: send a JSON object', 'body');
+  }
+  return parseOrThrow(spec.body!, req.body, 'body');
+}

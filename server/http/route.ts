@@ -1,0 +1,64 @@
+import type { Request, Response, RequestHandler } from 'express';
+import type { Transaction, Sequelize } from 'sequelize';
+import type { z } from 'zod';
+import type { Capability } from '../../shared/permissions';
+import type { Config } from '../config';
+import type { Mailer } from '../mail/mailer';
+import type { User } from '../models';
+import type { AuditInput } from '../services/audit';
+
+/** Who may call a route: anyone, any signed-in user, or the roles holding a capability. */
+export type Access = 'public' | 'signedIn' | Capability;
+
+export type LimiterName = 'signInByAddress' | 'signInByAccount' | 'mailByAddress' | 'mailByAccount' | 'writes';
+
+export interface AppDeps {
+  config: Config;
+  sequelize: Sequelize;
+  mailer: Mailer;
+}
+
+export interface HandlerContext<B, Q, P> {
+  req: Request;
+  res: Response;
+  /** The signed-in user; null only on public routes called without a session. */
+  user: User | null;
+  body: B;
+  query: Q;
+  params: P;
+  /** Open for transactional routes (every non-GET by default), null otherwise. */
+  transaction: Transaction | null;
+  deps: AppDeps;
+  ip: string;
+  /** Adds an audit event in the route's transaction (or at once, outside one). */
+  audit: (event: Omit<AuditInput, 'actorId' | 'ip'> & { actorId?: number | null }) => Promise<void>;
+  /** Work to do once the transaction has committed (e.g. send mail); awaited before replying. */
+  afterCommit: (task: () => Promise<void>) => void;
+}
+
+export interface Reply {
+  status?: number;
+  body?: unknown;
+}
+
+/** A route's whole declaration; server/http/mount.ts turns it into the request pipeline. */
+export interface RouteSpec<B = unknown, Q = unknown, P = unknown> {
+  method: 'get' | 'post' | 'put' | 'patch' | 'delete';
+  path: string;
+  access: Access;
+  summary: string;
+  limiters?: LimiterName[];
+  params?: z.ZodType<P>;
+  query?: z.ZodType<Q>;
+  body?: z.ZodType<B>;
+  /** Middleware that reads a multipart body (multer); runs after authorisation. */
+  upload?: (deps: AppDeps) => RequestHandler;
+  transactional?: boolean;
+  /** Return a Reply to send JSON; return nothing when the handler wrote the response itself. */
+  handler: (ctx: HandlerContext<B, Q, P>) => Promise<Reply | void>;
+}
+
+/** Declares a route with its types inferred from its schemas. */
+export function route<B = undefined, Q = undefined, P = undefined>(spec: RouteSpec<B, Q, P>): RouteSpec {
+  return spec as unknown as RouteSpec;
+}

@@ -1,0 +1,11 @@
+import type { QueryInterface } from 'sequelize';
+import * as m0001 from './0001-users-and-audit';
+
+export interface Migration {
+  name: string;
+  up: (params: { context: QueryInterface }) => Promise<void>;
+  down: (params: { context: QueryInterface }) => Promise<void>;
+}
+
+/** Every migration, oldest first. Add new ones at the end; never edit one that has shipped. */
+export const MIGRATIONS: Migration[] = [{ name: '0001-users-and-audit', ...m0001 }];

@@ -1,0 +1,39 @@
+import { confirmPasswordResetSchema, requestPasswordResetSchema } from '../../../shared/schemas/auth';
+import { route } from '../../http/route';
+import { badRequest } from '../../errors';
+import { findLiveToken } from '../../services/one-time-links';
+import { hashPassword } from '../../services/passwords';
+import { requestPasswordReset } from '../../services/team';
+
+export const passwordResetRoutes = [
+  route({
+    method: 'post',
+    path: '/api/password-resets',
+    access: 'public',
+    summary: 'E-mail a one-time password-reset link (same answer for every address)',
+    limiters: ['mailByAddress', 'mailByAccount'],
+    body: requestPasswordResetSchema,
+    async handler(ctx) {
+      await requestPasswordReset(ctx, ctx.body.email);
+      return { status: 202, body: { message: 'If that address belongs to an active account, a reset link is on its way.' } };
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/password-resets/confirm',
+    access: 'public',
+    summary: 'Set a new password through a reset link',
+    limiters: ['mailByAddress'],
+    body: confirmPasswordResetSchema,
+    async handler({ body, transaction, deps, audit }) {
+      const live = await findLiveToken(body.token, 'reset', transaction);
+      if (!live || !live.user.active) throw badRequest('This reset link has expired or was used already; ask for a new one', 'token');
+      live.user.passwordHash = await hashPassword(body.password, deps.config.BCRYPT_COST);
+      await live.user.save({ transaction });
+      live.row.usedAt = new Date();
+      await live.row.save({ transaction });
+      await audit({ actorId: live.user.id, action: 'password_reset.completed', entityType: 'user', entityId: live.user.id });
+      return { body: { message: 'Password changed; sign in with the new one.' } };
+    },
+  }),
+];

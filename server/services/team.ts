@@ -1,0 +1,84 @@
+import { Op } from 'sequelize';
+import { LIMITS } from '../../shared/limits';
+import type { CreateInvitationInput, UpdateUserInput } from '../../shared/schemas/team';
+import { conflict, notFound } from '../errors';
+import type { HandlerContext } from '../http/route';
+import { invitationMail, passwordResetMail } from '../mail/templates';
+import { User } from '../models';
+import { issueToken } from './one-time-links';
+
+type Ctx = HandlerContext<unknown, unknown, unknown>;
+
+function link(ctx: Ctx, path: string, token: string) {
+  return new URL(`${path}?token=${encodeURIComponent(token)}`, ctx.deps.config.PUBLIC_URL).toString();
+}
+
+/**
+ * Invites a person: creates the account (inactive, without password) or refreshes a pending
+ * invitation, issues a one-time link and e-mails it once the transaction has committed.
+ */
+export async function inviteUser(ctx: Ctx, input: CreateInvitationInput): Promise<User> {
+  const transaction = ctx.transaction;
+  let user = await User.findOne({ where: { email: input.email }, transaction, lock: transaction?.LOCK.UPDATE });
+  if (user && user.passwordHash !== null) throw conflict(`${input.email} already has an account`, { field: 'email' });
+  if (user) {
+    user.name = input.name;
+    user.role = input.role;
+    await user.save({ transaction });
+  } else {
+    user = await User.create(
+      { email: input.email, name: input.name, role: input.role, passwordHash: null, active: false, lastSignInAt: null, invitedBy: ctx.user!.id },
+      { transaction },
+    );
+  }
+  const token = await issueToken(
+    { userId: user.id, purpose: 'invitation', lifetimeMs: LIMITS.invitationHours * 3600_000, createdBy: ctx.user!.id },
+    transaction,
+  );
+  await ctx.audit({ action: 'invitation.created', entityType: 'user', entityId: user.id, details: { email: user.email, role: user.role } });
+  const mail = invitationMail({ to: user.email, name: user.name, role: user.role, inviter: ctx.user!.name, link: link(ctx, '/accept-invitation', token) });
+  ctx.afterCommit(() => ctx.deps.mailer.send(mail));
+  return user;
+}
+
+/** Issues and e-mails a reset link for an active account; unknown addresses do nothing, silently. */
+export async function requestPasswordReset(ctx: Ctx, email: string): Promise<void> {
+  const user = await User.findOne({ where: { email, active: true, passwordHash: { [Op.ne]: null } }, transaction: ctx.transaction });
+  await ctx.audit({ actorId: user?.id ?? null, action: 'password_reset.requested', entityType: 'user', entityId: user?.id ?? null, details: { known: Boolean(user) } });
+  if (!user) return;
+  const token = await issueToken({ userId: user.id, purpose: 'reset', lifetimeMs: LIMITS.resetMinutes * 60_000, createdBy: null }, ctx.transaction);
+  const mail = passwordResetMail({ to: user.email, name: user.name, link: link(ctx, '/reset-password', token) });
+  ctx.afterCommit(() => ctx.deps.mailer.send(mail));
+}
+
+/**
+ * Changes a user's role, name or active flag. The installation always keeps one active
+ * administrator, and an administrator cannot deactivate or demote themselves.
+ */
+export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): Promise<User> {
+  const transaction = ctx.transaction;
+  const user = await User.findByPk(id, { transaction, lock: transaction?.LOCK.UPDATE });
+  if (!user) throw notFound('User');
+  const losesAdmin = user.role === 'admin' && user.active && ((input.role && input.role !== 'admin') || input.active === false);
+  if (losesAdmin && user.id === ctx.user!.id) throw conflict('You cannot remove your own administrator access', { field: input.role ? 'role' : 'active' });
+  if (losesAdmin) {
+    // Lock the active administrators so two concurrent demotions cannot both pass this check.
+    const admins = await User.findAll({ where: { role: 'admin', active: true }, attributes: ['id'], transaction, lock: transaction?.LOCK.UPDATE });
+    if (admins.length <= 1) throw conflict('Gelwright needs at least one active administrator');
+  }
+  if (input.role && input.role !== user.role) {
+    await ctx.audit({ action: 'user.role_changed', entityType: 'user', entityId: user.id, details: { from: user.role, to: input.role } });
+    user.role = input.role;
+  }
+  if (input.active !== undefined && input.active !== user.active) {
+    if (input.active && user.passwordHash === null) throw conflict('This person has not accepted the invitation yet', { field: 'active' });
+    await ctx.audit({ action: input.active ? 'user.reactivated' : 'user.deactivated', entityType: 'user', entityId: user.id });
+    user.active = input.active;
+  }
+  if (input.name && input.name !== user.name) {
+    await ctx.audit({ action: 'user.renamed', entityType: 'user', entityId: user.id, details: { from: user.name, to: input.name } });
+    user.name = input.name;
+  }
+  await user.save({ transaction });
+  return user;
+}

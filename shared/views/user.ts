@@ -1,0 +1,20 @@
+import type { Role } from '../roles';
+
+/** A user as the API shows them; never carries the password hash. */
+export interface UserView {
+  id: number;
+  email: string;
+  name: string;
+  role: Role;
+  active: boolean;
+  invitationPending: boolean;
+  lastSignInAt: string | null;
+  createdAt: string;
+}
+
+export interface Page<T> {
+  items: T[];
+  total: number;
+  page: number;
+  pageSize: number;
+}

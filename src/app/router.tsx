@@ -1,0 +1,31 @@
+import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { AppShell } from './layout/app-shell';
+import { RequireSession } from './layout/require-session';
+import { RouteError } from './routes/route-error';
+
+/** Routes are split: each screen's code loads when it is first opened. */
+const router = createBrowserRouter([
+  { path: '/sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })) },
+  { path: '/forgot-password', lazy: () => import('./routes/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })) },
+  { path: '/reset-password', lazy: () => import('./routes/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })) },
+  { path: '/accept-invitation', lazy: () => import('./routes/accept-invitation').then((m) => ({ Component: m.AcceptInvitationRoute })) },
+  {
+    element: <RequireSession />,
+    errorElement: <RouteError />,
+    children: [
+      {
+        element: <AppShell />,
+        errorElement: <RouteError />,
+        children: [
+          { index: true, lazy: () => import('./routes/overview').then((m) => ({ Component: m.OverviewRoute })) },
+          { path: 'team', lazy: () => import('./routes/team').then((m) => ({ Component: m.TeamRoute })) },
+          { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },
+        ],
+      },
+    ],
+  },
+]);
+
+export function AppRouter() {
+  return <RouterProvider router={router} />;
+}

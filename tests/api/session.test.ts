@@ -1,0 +1,127 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { AuditEvent, User } from '../../server/models';
+import { bcryptCost } from '../../server/services/passwords';
+import { buildUser, signedInAgent, uniqueEmail } from '../support/builders';
+import { hostileSessionCookies } from '../support/session-tokens';
+import { startTestStack, type TestStack } from '../support/test-stack';
+
+let stack: TestStack;
+beforeAll(async () => {
+  stack = await startTestStack();
+});
+afterAll(() => stack.close());
+
+describe('POST /api/session', () => {
+  it('signs in with the right password, sets an httpOnly SameSite=Strict cookie and audits it', async () => {
+    const who = await buildUser({ role: 'formulator' });
+    const response = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+    expect(response.status).toBe(201);
+    expect(response.body.user).toMatchObject({ email: who.email, role: 'formulator' });
+    expect(JSON.stringify(response.body)).not.toMatch(/passwordHash|\$2[aby]\$/);
+    const cookie = String(response.headers['set-cookie']);
+    expect(cookie).toMatch(/^gw_session=/);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Strict/i);
+    expect(cookie).not.toMatch(/Secure/); // served over plain HTTP in the test
+    const events = await AuditEvent.count({ where: { action: 'session.signed_in', entityId: String(who.user.id) } });
+    expect(events).toBe(1);
+  });
+
+  it('accepts the e-mail in any letter case and with spaces around it', async () => {
+    const who = await buildUser({ role: 'viewer' });
+    const response = await request(stack.app).post('/api/session').send({ email: `  ${who.email.toUpperCase()} `, password: who.password });
+    expect(response.status).toBe(201);
+  });
+
+  it('answers a wrong password and an unknown e-mail with the same 401 and audits both', async () => {
+    const who = await buildUser({ role: 'scientist' });
+    const wrong = await request(stack.app).post('/api/session').send({ email: who.email, password: 'not-the-password' });
+    const unknownEmail = uniqueEmail('nobody');
+    const unknown = await request(stack.app).post('/api/session').send({ email: unknownEmail, password: 'whatever-it-is' });
+    expect(wrong.status).toBe(401);
+    expect(unknown.status).toBe(401);
+    expect(wrong.body).toEqual(unknown.body);
+    expect(wrong.headers['set-cookie']).toBeUndefined();
+    const failed = await AuditEvent.findAll({ where: { action: 'session.sign_in_failed' } });
+    const mine = failed.filter((e) => [who.email, unknownEmail].includes(String(e.details?.email)));
+    expect(mine).toHaveLength(2);
+  });
+
+  it('refuses a deactivated account with the same answer as a wrong password', async () => {
+    const who = await buildUser({ role: 'viewer', active: false });
+    const response = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+    expect(response.status).toBe(401);
+    expect(response.body.error.message).toBe('E-mail or password is wrong');
+  });
+
+  it('stores bcrypt hashes with a cost of 10 or more', async () => {
+    const who = await buildUser({ role: 'viewer' });
+    const stored = await User.findByPk(who.user.id);
+    expect(bcryptCost(stored!.passwordHash!)).toBeGreaterThanOrEqual(10);
+  });
+});
+
+describe('sign-in rate limits', () => {
+  it('locks an account after 5 failed sign-ins even with the right password next, and leaves other accounts alone', async () => {
+    const who = await buildUser({ role: 'formulator' });
+    const other = await buildUser({ role: 'formulator' });
+    for (let i = 0; i < 5; i++) {
+      const r = await request(stack.app).post('/api/session').send({ email: who.email, password: `wrong-${i}` });
+      expect(r.status).toBe(401);
+    }
+    const locked = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+    expect(locked.status).toBe(429);
+    const fine = await request(stack.app).post('/api/session').send({ email: other.email, password: other.password });
+    expect(fine.status).toBe(201);
+  });
+
+  it('limits failed sign-ins per address across many accounts, the same for unknown e-mails', async () => {
+    const limited = stack.appWith({ SIGNIN_LIMIT_PER_ADDRESS: '4' });
+    const answers = [];
+    for (let i = 0; i < 5; i++) {
+      answers.push((await request(limited).post('/api/session').send({ email: uniqueEmail('spray'), password: 'guess-guess' })).status);
+    }
+    expect(answers).toEqual([401, 401, 401, 401, 429]);
+  });
+});
+
+describe('GET /api/session and DELETE /api/session', () => {
+  it('returns the signed-in user without the password hash', async () => {
+    const who = await buildUser({ role: 'manager' });
+    const agent = await signedInAgent(stack.app, who);
+    const response = await agent.get('/api/session');
+    expect(response.status).toBe(200);
+    expect(response.body.user).toMatchObject({ id: who.user.id, role: 'manager', invitationPending: false });
+    expect(Object.keys(response.body.user)).not.toContain('passwordHash');
+  });
+
+  it('answers 401 without a session', async () => {
+    expect((await request(stack.app).get('/api/session')).status).toBe(401);
+  });
+
+  it('signs out: the cookie is cleared and the next request is anonymous', async () => {
+    const who = await buildUser({ role: 'viewer' });
+    const agent = await signedInAgent(stack.app, who);
+    const out = await agent.delete('/api/session');
+    expect(out.status).toBe(204);
+    expect(String(out.headers['set-cookie'])).toMatch(/gw_session=;/);
+    expect((await agent.get('/api/session')).status).toBe(401);
+  });
+
+  it('refuses expired, tampered, alg-none and foreign tokens', async () => {
+    const who = await buildUser({ role: 'admin' });
+    const cookies = hostileSessionCookies(stack.config, who.user.id);
+    for (const [kind, cookie] of Object.entries(cookies)) {
+      const response = await request(stack.app).get('/api/session').set('Cookie', cookie);
+      expect(response.status, kind).toBe(401);
+    }
+  });
+
+  it('ends the session of a user who was deactivated after signing in', async () => {
+    const who = await buildUser({ role: 'scientist' });
+    const agent = await signedInAgent(stack.app, who);
+    await User.update({ active: false }, { where: { id: who.user.id } });
+    expect((await agent.get('/api/session')).status).toBe(401);
+  });
+});
