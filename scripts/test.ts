@@ -24,7 +24,7 @@ async function main(): Promise<number> {
 
   const instance = mariaInstance(root, 'mariadb-test', TEST_DB_PORT);
   console.log(`test: MariaDB on 127.0.0.1:${TEST_DB_PORT} (data in ${instance.dataDir})`);
-  const { startedHere } = await startMaria(instance);
+  await startMaria(instance);
   try {
     const databases = testDatabases();
     dropDatabases(instance, databases);
@@ -39,7 +39,7 @@ async function main(): Promise<number> {
     buildClientIfStale(root);
     return await runVitest(process.argv.slice(2));
   } finally {
-    if (startedHere) await stopMaria(instance);
+    await stopMaria(instance);
   }
 }
 

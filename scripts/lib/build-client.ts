@@ -26,7 +26,7 @@ export function buildClientIfStale(root: string, outDir = 'dist') {
   const wanted = fingerprint(root);
   if (existsSync(stamp) && readFileSync(stamp, 'utf8').trim() === wanted) return false;
   console.log('gelwright: building the client (vite build) …');
-  const result = spawnSync(join(root, 'node_modules', '.bin', 'vite'), ['build', '--outDir', outDir, '--emptyOutDir'], {
+  const result = spawnSync(join(root, 'node_modules', '.bin', 'vite'), ['build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], {
     cwd: root,
     stdio: ['ignore', 'inherit', 'inherit'],
   });

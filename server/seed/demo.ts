@@ -1,4 +1,4 @@
-import type { Sequelize } from 'sequelize';
+import { QueryTypes, type Sequelize } from 'sequelize';
 import type { Config } from '../config';
 import type { Role } from '../../shared/roles';
 import { User } from '../models';
@@ -23,8 +23,8 @@ const MARKER = 'demo_seeded_at';
 
 /** Seeds the demo once; later runs find the marker and leave everything as the team left it. */
 export async function seedDemoIfFirstRun(sequelize: Sequelize, config: Config): Promise<boolean> {
-  const [rows] = await sequelize.query('SELECT value FROM app_meta WHERE name = ?', { replacements: [MARKER] });
-  if ((rows as unknown[]).length > 0) return false;
+  const rows = await sequelize.query('SELECT value FROM app_meta WHERE name = ?', { replacements: [MARKER], type: QueryTypes.SELECT });
+  if (rows.length > 0) return false;
   await sequelize.transaction(async (transaction) => {
     for (const person of DEMO_USERS) {
       const user = await User.create(

@@ -74,8 +74,14 @@ export function PeopleTable({ me }: { me: UserView }) {
               <Td className="text-ink-soft">{user.lastSignInAt ? formatDateTime(user.lastSignInAt) : '—'}</Td>
               <Td className="text-right">
                 {!user.invitationPending && user.id !== me.id && (
-                  <Button variant={user.active ? 'secondary' : 'quiet'} size="sm" disabled={update.isPending} onClick={() => change(user, { active: !user.active })}>
-                    {user.active ? `Deactivate ${user.name.split(' ')[0]}` : `Reactivate ${user.name.split(' ')[0]}`}
+                  <Button
+                    variant={user.active ? 'secondary' : 'quiet'}
+                    size="sm"
+                    disabled={update.isPending}
+                    aria-label={`${user.active ? 'Deactivate' : 'Reactivate'} ${user.name}`}
+                    onClick={() => change(user, { active: !user.active })}
+                  >
+                    {user.active ? 'Deactivate' : 'Reactivate'}
                   </Button>
                 )}
               </Td>

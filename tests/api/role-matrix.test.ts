@@ -1,0 +1,90 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { ROLES, type Role } from '../../shared/roles';
+import { ALL_ROUTES } from '../../server/routes';
+import { buildUser } from '../support/builders';
+import { ANYONE, SIGNED_IN, concretePath, expectedOutcome, routeKey, type Expectation } from '../support/role-matrix';
+import { hostileSessionCookies } from '../support/session-tokens';
+import { startTestStack, type TestStack } from '../support/test-stack';
+
+/**
+ * The declared allow-list, written out here on its own (not read from the routes), so
+ * that a route whose declared access drifts from product.md fails this test. A new route
+ * without an entry fails it too.
+ */
+const ALLOW: Record<string, Expectation> = {
+  'GET /api/health': ANYONE,
+  'POST /api/session': ANYONE,
+  'GET /api/session': SIGNED_IN,
+  'DELETE /api/session': ANYONE,
+  'POST /api/invitations': ['admin'],
+  'POST /api/invitations/accept': ANYONE,
+  'GET /api/invitations/:token': ANYONE,
+  'POST /api/password-resets': ANYONE,
+  'POST /api/password-resets/confirm': ANYONE,
+  'GET /api/users': ['admin'],
+  'PATCH /api/users/:id': ['admin'],
+  'GET /api/audit-events': ['admin'],
+  'GET /api/outbox': ['admin'],
+  'GET /api/outbox/:id': ['admin'],
+};
+
+let stack: TestStack;
+const cookies = {} as Record<Role, string>;
+let hostile: ReturnType<typeof hostileSessionCookies>;
+
+beforeAll(async () => {
+  stack = await startTestStack({ env: { SIGNIN_LIMIT_PER_ADDRESS: '100000', SIGNIN_LIMIT_PER_ACCOUNT: '100000' } });
+  for (const role of ROLES) {
+    const who = await buildUser({ role });
+    const response = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+    cookies[role] = String(response.headers['set-cookie']).split(';')[0];
+  }
+  const admin = await buildUser({ role: 'admin' });
+  hostile = hostileSessionCookies(stack.config, admin.user.id);
+});
+afterAll(() => stack.close());
+
+function call(method: string, path: string, cookie?: string) {
+  const agent = request(stack.app);
+  const req = (agent as unknown as Record<string, (p: string) => request.Test>)[method](path);
+  if (cookie) req.set('Cookie', cookie);
+  return method === 'get' || method === 'delete' ? req : req.send({});
+}
+
+describe('role matrix', () => {
+  it('has a declared expectation for every route, and every declared route exists', () => {
+    const actual = ALL_ROUTES.map(routeKey).sort();
+    expect(actual).toEqual(Object.keys(ALLOW).sort());
+  });
+
+  it('answers every route × every role and anonymous callers as declared', async () => {
+    const mismatches: string[] = [];
+    let checked = 0;
+    for (const spec of ALL_ROUTES) {
+      const expectation = ALLOW[routeKey(spec)];
+      for (const caller of ['anonymous', ...ROLES] as const) {
+        const response = await call(spec.method, concretePath(spec), caller === 'anonymous' ? undefined : cookies[caller]);
+        const wanted = expectedOutcome(expectation, caller);
+        const got = response.status === 401 || response.status === 403 ? response.status : 'allowed';
+        if (got !== wanted) mismatches.push(`${routeKey(spec)} as ${caller}: wanted ${wanted}, got ${response.status}`);
+        if (response.status >= 500) mismatches.push(`${routeKey(spec)} as ${caller}: server error ${response.status}`);
+        checked++;
+      }
+    }
+    expect(mismatches).toEqual([]);
+    expect(checked).toBe(ALL_ROUTES.length * (ROLES.length + 1));
+  });
+
+  it('treats expired, tampered, alg-none and foreign tokens as no session on every non-public route', async () => {
+    const mismatches: string[] = [];
+    for (const spec of ALL_ROUTES) {
+      if (ALLOW[routeKey(spec)] === ANYONE) continue;
+      for (const [kind, cookie] of Object.entries(hostile)) {
+        const response = await call(spec.method, concretePath(spec), cookie);
+        if (response.status !== 401) mismatches.push(`${routeKey(spec)} with ${kind} token: ${response.status}`);
+      }
+    }
+    expect(mismatches).toEqual([]);
+  });
+});
