@@ -34,3 +34,32 @@ export const pageQuerySchema = z.object({
     .max(LIMITS.pageSizeMax, `pageSize must be at most ${LIMITS.pageSizeMax}`)
     .default(LIMITS.pageSizeDefault),
 });
+
+/** A finite number within [min, max], with the field's unit in the message. */
+export function boundedNumber(label: string, min: number, max: number, unit = '') {
+  const suffix = unit ? ` ${unit}` : '';
+  return z
+    .number({ error: `${label} must be a number` })
+    .refine(Number.isFinite, `${label} must be a finite number`)
+    .refine((v) => v >= min && v <= max, `${label} must be between ${min} and ${max}${suffix}`);
+}
+
+export const optionalText = (label: string, max: number) =>
+  z
+    .string({ error: `${label} must be text` })
+    .trim()
+    .max(max, `${label} must be at most ${max} characters`)
+    .optional()
+    .transform((v) => (v === '' ? undefined : v));
+
+export const requiredText = (label: string, max: number) =>
+  z
+    .string({ error: `${label} is required` })
+    .trim()
+    .min(1, `${label} is required`)
+    .max(max, `${label} must be at most ${max} characters`);
+
+export const optionalPrice = boundedNumber('Price per kg', 0, 1_000_000, '/kg').nullable().optional();
+
+export const idSchema = (label: string) =>
+  z.number({ error: `${label} must be a record id` }).int(`${label} must be a whole number`).positive(`${label} must be positive`);

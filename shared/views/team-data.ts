@@ -1,0 +1,208 @@
+import type { AttractionSource, GoalState, ObservationMethod, ObservedState, PredictedState, ShortlistStatus, Stabilisation } from '../states';
+import type { RecipeAttraction } from '../schemas/recipes';
+
+export interface PersonRef {
+  id: number;
+  name: string;
+}
+
+export interface ProgrammeView {
+  id: number;
+  name: string;
+  goalState: GoalState;
+  attractionSource: AttractionSource;
+  codePrefix: string;
+  notes: string | null;
+  archived: boolean;
+  recipeCount: number;
+  observationCount: number;
+  createdAt: string;
+  updatedAt: string;
+}
+
+interface MaterialBase {
+  id: number;
+  name: string;
+  pricePerKg: number | null;
+  notes: string | null;
+  archived: boolean;
+  updatedAt: string;
+}
+export interface ParticleView extends MaterialBase {
+  coreMaterial: string;
+  radiusNm: number;
+  polydispersityPct: number;
+  densityGcm3: number;
+  stabilisation: Stabilisation;
+  surfacePotentialMv: number | null;
+  hamakerZj: number | null;
+}
+export interface DepletantView extends MaterialBase {
+  molarMassKgMol: number;
+  rgNm: number | null;
+  rgPrefactorNm: number | null;
+  rgExponent: number | null;
+}
+export interface SolventView extends MaterialBase {
+  viscosityMPas: number;
+  densityGcm3: number;
+  temperatureC: number;
+  relativePermittivity: number | null;
+}
+export interface SaltView extends MaterialBase {
+  valence: number;
+  molarMassGMol: number | null;
+}
+export interface MaterialViews {
+  particles: ParticleView;
+  depletants: DepletantView;
+  solvents: SolventView;
+  salts: SaltView;
+}
+
+/** Everything the server derived from a recipe with shared/physics, stored with the model version. */
+export interface RecipeDerived {
+  modelVersion: string;
+  phi: number;
+  sizeRatio: number | null;
+  polymerReservoir: number | null;
+  polymerSystem: number | null;
+  overlapConcentrationGL: number | null;
+  contactEnergyKT: number | null;
+  rangeSigma: number | null;
+  reducedB2: number | null;
+  stickiness: number | null;
+  debyeLengthNm: number | null;
+  closestApproachNm: number | null;
+  predictedState: PredictedState | null;
+  nearestBoundary: { id: string; label: string } | null;
+  margin: number | null;
+  marginDescription: string | null;
+  reason: string | null;
+  /** The map the prediction was made on (depletion at this size ratio, or generic short-range). */
+  map: { kind: 'generic' | 'depletion'; q?: number; theory?: string };
+  timescales: {
+    diffusionM2s: number | null;
+    brownianTimeS: number | null;
+    gravitationalPeclet: number | null;
+    settlingSpeedMs: number | null;
+  };
+  warnings: string[];
+  calibration: { id: number; acceptedAt: string } | null;
+}
+
+export interface RecipeView {
+  id: number;
+  code: string;
+  programmeId: number;
+  name: string;
+  particleId: number;
+  solventId: number;
+  fraction: { kind: 'mass' | 'volume'; value: number };
+  temperatureC: number;
+  attraction: RecipeAttraction;
+  notes: string | null;
+  archived: boolean;
+  origin: string | null;
+  derived: RecipeDerived;
+  createdBy: PersonRef | null;
+  createdAt: string;
+  updatedAt: string;
+  observationCount?: number;
+}
+
+export interface AttachmentView {
+  id: number;
+  observationId: number;
+  originalName: string;
+  mimeType: string;
+  sizeBytes: number;
+  sha256: string;
+  uploadedBy: PersonRef | null;
+  createdAt: string;
+  isImage: boolean;
+}
+
+export interface ObservationView {
+  id: number;
+  programmeId: number;
+  recipeId: number | null;
+  recipeCode: string | null;
+  adhoc: { phi: number; reducedB2: number; description: string | null } | null;
+  mixedAt: string;
+  ageDays: number;
+  observedState: ObservedState;
+  method: ObservationMethod;
+  storageModulusPa: number | null;
+  yieldStressPa: number | null;
+  settledHeightPct: number | null;
+  notes: string | null;
+  predictedState: PredictedState | null;
+  agrees: boolean | null;
+  archived: boolean;
+  observer: PersonRef | null;
+  attachments: AttachmentView[];
+  createdAt: string;
+}
+
+export interface ImportRowProblem {
+  row: number;
+  column: string;
+  message: string;
+}
+export interface ImportReport {
+  ok: boolean;
+  rows: number;
+  imported: number;
+  problems: ImportRowProblem[];
+  /** Set when an Idempotency-Key was seen before and the earlier result is returned. */
+  replayed?: boolean;
+  batchId?: string;
+}
+
+export interface ShortlistItemView {
+  recipeId: number;
+  position: number;
+  reason: string;
+  recipe: Pick<RecipeView, 'id' | 'code' | 'name' | 'derived' | 'archived'>;
+}
+export interface ShortlistEventView {
+  from: ShortlistStatus | null;
+  to: ShortlistStatus;
+  actor: PersonRef | null;
+  comment: string | null;
+  at: string;
+}
+export interface ShortlistView {
+  id: number;
+  programmeId: number;
+  title: string;
+  purpose: string | null;
+  targetState: GoalState;
+  status: ShortlistStatus;
+  author: PersonRef | null;
+  reviewer: PersonRef | null;
+  decisionComment: string | null;
+  submittedAt: string | null;
+  decidedAt: string | null;
+  items: ShortlistItemView[];
+  history: ShortlistEventView[];
+  createdAt: string;
+  updatedAt: string;
+}
+
+/**
+ * Map overlay for a programme, columnar so 10,000 points stay small. Each point carries its
+ * coordinates in every attraction description the map can show; null where not defined.
+ */
+export interface MapPoints {
+  programmeId: number;
+  recipes: {
+    columns: readonly ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'];
+    rows: (string | number | null)[][];
+  };
+  observations: {
+    columns: readonly ['id', 'recipeId', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'observedState', 'predictedState', 'agrees', 'ageDays', 'recipeCode'];
+    rows: (string | number | boolean | null)[][];
+  };
+}

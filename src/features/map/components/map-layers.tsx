@@ -1,0 +1,139 @@
+import { line } from 'd3-shape';
+import { STATE_LABELS } from '@shared/states';
+import { STATE_STYLE } from '@/lib/state-style';
+import { formatNumber } from '@/lib/format';
+import type { StateRegion } from '../geometry/regions';
+import type { MapScales } from '../geometry/scales';
+import type { Layer } from '../geometry/map-view';
+import type { MapDrawing, MapLine, XY } from '../geometry/types';
+
+const TONE: Record<MapLine['tone'], { stroke: string; width: number }> = {
+  coexistence: { stroke: '#1c2630', width: 2 },
+  spinodal: { stroke: '#4a5662', width: 1.4 },
+  percolation: { stroke: '#2c6e7f', width: 1.4 },
+  glass: { stroke: '#7d55b8', width: 1.8 },
+  crystal: { stroke: '#c27a1c', width: 1.8 },
+  gel: { stroke: '#1c8a63', width: 1.8 },
+  calibrated: { stroke: '#b7791f', width: 2.4 },
+};
+
+function pathOf(points: XY[], scales: MapScales) {
+  return line<XY>()
+    .defined(([x, y]) => Number.isFinite(x) && Number.isFinite(y))
+    .x(([x]) => scales.x(x))
+    .y(([, y]) => scales.y(y))(points) ?? '';
+}
+
+/** Where a line's label goes: the visible point furthest from the plot's edges, nudged up. */
+function labelSpot(points: XY[], scales: MapScales): [number, number] | null {
+  let best: [number, number] | null = null;
+  let bestScore = -Infinity;
+  for (const [x, y] of points) {
+    const px = scales.x(x);
+    const py = scales.y(y);
+    const edge = Math.min(px, scales.inner.width - px, py, scales.inner.height - py);
+    if (edge < 12) continue;
+    const score = Math.min(edge, 80) + px * 0.02;
+    if (score > bestScore) {
+      bestScore = score;
+      best = [px, py - 5];
+    }
+  }
+  return best;
+}
+
+export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawing: MapDrawing; regions: StateRegion[]; scales: MapScales; layers: Set<Layer>; clipId: string }) {
+  return (
+    <>
+      <defs>
+        <clipPath id={clipId}>
+          <rect width={scales.inner.width} height={scales.inner.height} />
+        </clipPath>
+      </defs>
+      <rect width={scales.inner.width} height={scales.inner.height} fill="#fbfaf7" stroke="#c4c0b4" />
+      <g clipPath={`url(#${clipId})`}>
+        {layers.has('regions') &&
+          regions.map((region) => (
+            <path key={region.state} d={region.rings.map((ring) => `${pathOf(ring, scales)}Z`).join(' ')} fill={STATE_STYLE[region.state].tint} fillOpacity={0.75} fillRule="evenodd" stroke="none" data-region={region.state} />
+          ))}
+        {layers.has('lines') &&
+          drawing.lines.map((l) => (
+            <path
+              key={l.id}
+              d={pathOf(l.points, scales)}
+              fill="none"
+              stroke={TONE[l.tone].stroke}
+              strokeWidth={TONE[l.tone].width}
+              strokeDasharray={l.dashed ? '6 4' : l.approximate ? '2 3' : undefined}
+              data-line={l.id}
+            />
+          ))}
+        {layers.has('lines') &&
+          drawing.markers.map((m) => (
+            <g key={m.id} transform={`translate(${scales.x(m.x)},${scales.y(m.y)})`} data-marker={m.id}>
+              {m.reference ? <path d="M-5,-5L5,5M-5,5L5,-5" stroke="#1c2630" strokeWidth={1.6} /> : <circle r={4.5} fill="#1c2630" stroke="#ffffff" strokeWidth={1.5} />}
+              {layers.has('labels') && (
+                <text x={7} y={-6} fontSize={11} fill="#1c2630" paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+                  {m.label}
+                </text>
+              )}
+            </g>
+          ))}
+        {layers.has('labels') && layers.has('regions') &&
+          regions.map((region) => {
+            if (!region.labelAt) return null;
+            const x = scales.x(region.labelAt[0]);
+            const y = scales.y(region.labelAt[1]);
+            if (x < 20 || y < 14 || x > scales.inner.width - 20 || y > scales.inner.height - 6) return null;
+            return (
+              <text key={region.state} x={x} y={y} textAnchor="middle" fontSize={13} fontWeight={600} fill={STATE_STYLE[region.state].colour} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+                {STATE_LABELS[region.state]}
+              </text>
+            );
+          })}
+        {layers.has('labels') && layers.has('lines') &&
+          drawing.lines.map((l) => {
+            const spot = labelSpot(l.points, scales);
+            return spot ? (
+              <text key={l.id} x={spot[0]} y={spot[1]} fontSize={11} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+                {l.label}
+              </text>
+            ) : null;
+          })}
+      </g>
+    </>
+  );
+}
+
+export function MapAxes({ scales, xLabel, yLabel }: { scales: MapScales; xLabel: string; yLabel: string }) {
+  const xTicks = scales.x.ticks(8);
+  const yTicks = scales.y.ticks(7);
+  return (
+    <g fontSize={11} fill="#4a5662">
+      <g transform={`translate(0,${scales.inner.height})`}>
+        {xTicks.map((t) => (
+          <g key={t} transform={`translate(${scales.x(t)},0)`}>
+            <line y2={5} stroke="#7b858f" />
+            <text y={18} textAnchor="middle">
+              {formatNumber(t, 3)}
+            </text>
+          </g>
+        ))}
+        <text x={scales.inner.width / 2} y={36} textAnchor="middle" fontSize={12} fill="#1c2630" fontWeight={500}>
+          {xLabel}
+        </text>
+      </g>
+      {yTicks.map((t) => (
+        <g key={t} transform={`translate(0,${scales.y(t)})`}>
+          <line x2={-5} stroke="#7b858f" />
+          <text x={-8} dy="0.32em" textAnchor="end">
+            {formatNumber(t, 3)}
+          </text>
+        </g>
+      ))}
+      <text transform={`translate(${-46},${scales.inner.height / 2}) rotate(-90)`} textAnchor="middle" fontSize={12} fill="#1c2630" fontWeight={500}>
+        {yLabel}
+      </text>
+    </g>
+  );
+}

@@ -1,0 +1,60 @@
+import type { ObservedState, PredictedState } from '@shared/states';
+
+export type XY = [number, number];
+
+/** One drawn boundary, in map coordinates (x = φ, y = the chosen attraction axis). */
+export interface MapLine {
+  id: string;
+  label: string;
+  points: XY[];
+  /** Metastable or approximate branches are drawn dashed. */
+  dashed: boolean;
+  approximate: boolean;
+  tone: 'coexistence' | 'spinodal' | 'percolation' | 'glass' | 'crystal' | 'gel' | 'calibrated';
+}
+
+export interface MapMarker {
+  id: string;
+  label: string;
+  x: number;
+  y: number;
+  /** A published simulation value shown for reference, not a prediction. */
+  reference: boolean;
+}
+
+/** Everything the figure draws apart from the team's points; made by the map builder adapter. */
+export interface MapDrawing {
+  xDomain: XY;
+  yDomain: XY;
+  xLabel: string;
+  yLabel: string;
+  modelLabel: string;
+  lines: MapLine[];
+  markers: MapMarker[];
+  notes: string[];
+  /** Predicts the state at a point of the map, for shading regions. */
+  classify: (x: number, y: number) => PredictedState | null;
+}
+
+/** A recipe or an observation placed on the map. */
+export interface MapPoint {
+  key: string;
+  kind: 'recipe' | 'observation';
+  id: number;
+  x: number;
+  y: number;
+  /** Observed state for observations, predicted state for recipes. */
+  state: ObservedState;
+  predicted: PredictedState | null;
+  agrees: boolean | null;
+  code: string | null;
+  name: string | null;
+  ageDays: number | null;
+  recipeId: number | null;
+  margin: number | null;
+}
+
+export interface Viewport {
+  x: XY;
+  y: XY;
+}

@@ -1,0 +1,14 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { MaterialKind } from '@shared/schemas/materials';
+import type { MaterialViews } from '@shared/views/team-data';
+import { api } from '@/lib/api-client';
+
+/** The live library entries a recipe can use (read-only here; the library screen edits them). */
+export const recipeMaterialsQueryOptions = <K extends MaterialKind>(kind: K) =>
+  queryOptions({
+    queryKey: ['recipe-materials', kind] as const,
+    queryFn: async () => (await api.get<{ items: MaterialViews[K][] }>(`/api/materials/${kind}`)).items,
+    staleTime: 60_000,
+  });
+
+export const useRecipeMaterials = <K extends MaterialKind>(kind: K) => useQuery(recipeMaterialsQueryOptions(kind));
