@@ -49,8 +49,8 @@ export const optionalText = (label: string, max: number) =>
     .string({ error: `${label} must be text` })
     .trim()
     .max(max, `${label} must be at most ${max} characters`)
-    .optional()
-    .transform((v) => (v === '' ? undefined : v));
+    .transform((v) => (v === '' ? undefined : v))
+    .optional();
 
 export const requiredText = (label: string, max: number) =>
   z

@@ -1,7 +1,11 @@
 import { useForm, useWatch, type Control } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState, type ReactNode } from 'react';
+import type { z } from 'zod';
 import { recipeInputSchema, type RecipeInput } from '@shared/schemas/recipes';
+
+/** What the form holds while typing (before zod's transforms), and what it submits. */
+type RecipeFormValues = z.input<typeof recipeInputSchema>;
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';
@@ -28,7 +32,7 @@ export function RecipeForm({ initial, submitLabel, onSubmit, renderPreview }: Re
   const depletants = useRecipeMaterials('depletants');
   const salts = useRecipeMaterials('salts');
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, setValue, control, formState } = useForm<RecipeInput>({
+  const { register, handleSubmit, setError, setValue, control, formState } = useForm<RecipeFormValues, unknown, RecipeInput>({
     resolver: zodResolver(recipeInputSchema),
     defaultValues: initial,
     mode: 'onChange',
@@ -132,7 +136,7 @@ export function RecipeForm({ initial, submitLabel, onSubmit, renderPreview }: Re
   );
 }
 
-function LivePreview({ control, render }: { control: Control<RecipeInput>; render: RecipeFormProps['renderPreview'] }) {
+function LivePreview({ control, render }: { control: Control<RecipeFormValues, unknown, RecipeInput>; render: RecipeFormProps['renderPreview'] }) {
   const values = useWatch({ control }) as RecipeInput;
   return (
     <aside aria-label="Live prediction" className="flex flex-col gap-4 xl:sticky xl:top-6 xl:self-start">
@@ -141,9 +145,9 @@ function LivePreview({ control, render }: { control: Control<RecipeInput>; rende
   );
 }
 
-type Register = ReturnType<typeof useForm<RecipeInput>>['register'];
+type Register = ReturnType<typeof useForm<RecipeFormValues, unknown, RecipeInput>>['register'];
 
-function AttractionFields({ control, register, errors, depletants, salts }: { control: Control<RecipeInput>; register: Register; errors: Record<string, Record<string, { message?: string }>>; depletants: { id: number; name: string }[]; salts: { id: number; name: string; valence: number }[] }) {
+function AttractionFields({ control, register, errors, depletants, salts }: { control: Control<RecipeFormValues, unknown, RecipeInput>; register: Register; errors: Record<string, Record<string, { message?: string }>>; depletants: { id: number; name: string }[]; salts: { id: number; name: string; valence: number }[] }) {
   const source = useWatch({ control, name: 'attraction.source' });
   const e = (errors.attraction ?? {}) as Record<string, { message?: string }>;
   if (source === 'depletion') {
