@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ObservationInput } from '@shared/schemas/observations';
+import type { ObservationView } from '@shared/views/team-data';
+import { api } from '@/lib/api-client';
+import { observationKeys } from './observation-keys';
+
+export const createObservation = (input: ObservationInput) => api.post<{ observation: ObservationView }>('/api/observations', input);
+
+export function useCreateObservation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createObservation,
+    onSuccess: ({ observation }) => {
+      queryClient.setQueryData(observationKeys.detail(observation.id), { observation });
+      return queryClient.invalidateQueries({ queryKey: observationKeys.lists() });
+    },
+  });
+}

@@ -1,0 +1,53 @@
+import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES, STATE_LABELS } from '@shared/states';
+import { Button } from '@/components/ui/button';
+import { Field } from '@/components/ui/field';
+import { SelectInput, TextInput } from '@/components/ui/inputs';
+import type { BenchFilterValues } from '../hooks/use-bench-filters';
+
+export function BenchFilters({ values, onChange, onClear }: { values: BenchFilterValues; onChange: (patch: Partial<BenchFilterValues>) => void; onClear: () => void }) {
+  const any = values.state || values.method || values.disagreeing || values.minAge || values.maxAge;
+  return (
+    <fieldset className="flex flex-wrap items-end gap-3 rounded-card border border-line bg-panel px-4 py-3">
+      <legend className="sr-only">Filter the bench log</legend>
+      <Field label="Observed state" className="w-44">
+        {(props) => (
+          <SelectInput {...props} value={values.state} onChange={(event) => onChange({ state: event.target.value as BenchFilterValues['state'] })}>
+            <option value="">Any state</option>
+            {OBSERVED_STATES.map((state) => (
+              <option key={state} value={state}>
+                {STATE_LABELS[state]}
+              </option>
+            ))}
+          </SelectInput>
+        )}
+      </Field>
+      <Field label="Method" className="w-44">
+        {(props) => (
+          <SelectInput {...props} value={values.method} onChange={(event) => onChange({ method: event.target.value as BenchFilterValues['method'] })}>
+            <option value="">Any method</option>
+            {OBSERVATION_METHODS.map((method) => (
+              <option key={method} value={method}>
+                {METHOD_LABELS[method]}
+              </option>
+            ))}
+          </SelectInput>
+        )}
+      </Field>
+      <Field label="Age from (days)" className="w-32">
+        {(props) => <TextInput {...props} type="number" min={0} step="any" value={values.minAge} onChange={(event) => onChange({ minAge: event.target.value })} />}
+      </Field>
+      <Field label="Age up to (days)" className="w-32">
+        {(props) => <TextInput {...props} type="number" min={0} step="any" value={values.maxAge} onChange={(event) => onChange({ maxAge: event.target.value })} />}
+      </Field>
+      <label className="inline-flex items-center gap-2 pb-2 text-sm">
+        <input type="checkbox" className="h-4 w-4 accent-fjord-500" checked={values.disagreeing} onChange={(event) => onChange({ disagreeing: event.target.checked })} />
+        Only outcomes that disagree with the prediction
+      </label>
+      {any && (
+        <Button variant="quiet" size="sm" className="mb-1.5" onClick={onClear}>
+          Clear filters
+        </Button>
+      )}
+    </fieldset>
+  );
+}
