@@ -1,0 +1,56 @@
+import { Link } from 'react-router-dom';
+import { STATE_LABELS, type GoalState } from '@shared/states';
+import type { ShortlistItemView } from '@shared/views/team-data';
+import { Badge } from '@/components/ui/page';
+import { StateBadge } from '@/components/ui/state-badge';
+import { EmptyState } from '@/components/ui/states';
+import { formatNumber } from '@/lib/format';
+import { RecipeEvidence } from './recipe-evidence';
+
+/** The shortlisted recipes in the author's order: prediction, margin, the author's reason and the bench evidence. */
+export function ShortlistItems({ items, targetState }: { items: ShortlistItemView[]; targetState: GoalState }) {
+  if (items.length === 0) return <EmptyState title="No recipe on this shortlist yet">Its author adds recipes while it is a draft.</EmptyState>;
+  return (
+    <ol className="flex flex-col gap-3" aria-label="Recipes on the shortlist">
+      {items.map((item, index) => {
+        const { recipe } = item;
+        const predicted = recipe.derived.predictedState;
+        const offTarget = predicted !== null && predicted !== targetState;
+        return (
+          <li key={item.recipeId} className="rounded-card border border-line bg-panel p-4 shadow-card">
+            <div className="grid gap-4 md:grid-cols-[1fr_18rem]">
+              <div>
+                <p className="flex flex-wrap items-center gap-2">
+                  <span className="text-ink-soft">{index + 1}.</span>
+                  <Link to={`/recipes/${recipe.code}`} className="font-semibold">
+                    {recipe.code}
+                  </Link>
+                  <span>{recipe.name}</span>
+                  {recipe.archived && <Badge>Archived recipe</Badge>}
+                </p>
+                <dl className="mt-2 grid grid-cols-[8rem_1fr] gap-x-3 gap-y-1 text-sm">
+                  <dt className="text-ink-soft">Predicted state</dt>
+                  <dd>
+                    {predicted ? <StateBadge state={predicted} /> : <span className="text-ink-soft">No prediction</span>}
+                    {offTarget && <span className="ml-2 font-medium text-brick-700">⚠ not the target ({STATE_LABELS[targetState]})</span>}
+                  </dd>
+                  <dt className="text-ink-soft">Margin</dt>
+                  <dd>
+                    {recipe.derived.margin !== null ? formatNumber(recipe.derived.margin, 2) : '—'}
+                    {recipe.derived.marginDescription && <span className="text-ink-soft"> · {recipe.derived.marginDescription}</span>}
+                    {recipe.derived.nearestBoundary && <span className="text-ink-soft"> (nearest: {recipe.derived.nearestBoundary.label})</span>}
+                  </dd>
+                  <dt className="text-ink-soft">Reason</dt>
+                  <dd className="whitespace-pre-line">{item.reason}</dd>
+                </dl>
+              </div>
+              <div className="border-t border-line pt-3 md:border-l md:border-t-0 md:pl-4 md:pt-0">
+                <RecipeEvidence recipeId={recipe.id} code={recipe.code} />
+              </div>
+            </div>
+          </li>
+        );
+      })}
+    </ol>
+  );
+}
