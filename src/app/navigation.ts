@@ -11,5 +11,9 @@ export interface NavItem {
 /** The screens that exist, in the order the rail shows them. */
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Overview', capability: 'data.read', description: 'What Gelwright does for you' },
+  { to: '/bench', label: 'Bench log', capability: 'data.read', description: 'Observed outcomes beside their predictions; record, import and export' },
+  { to: '/shortlists', label: 'Shortlists', capability: 'data.read', description: 'Candidate recipes on their way to approval' },
+  { to: '/library', label: 'Library', capability: 'data.read', description: 'Particles, depletants, solvents and salts' },
+  { to: '/find', label: 'Find', capability: 'data.read', description: 'Look up a recipe and read where it sits' },
   { to: '/team', label: 'Team', capability: 'team.manage', description: 'People, roles, invitations, audit trail, outbox' },
 ];

@@ -19,6 +19,11 @@ const router = createBrowserRouter([
         children: [
           { index: true, lazy: () => import('./routes/overview').then((m) => ({ Component: m.OverviewRoute })) },
           { path: 'team', lazy: () => import('./routes/team').then((m) => ({ Component: m.TeamRoute })) },
+          { path: 'bench', lazy: () => import('./routes/bench').then((m) => ({ Component: m.BenchRoute })) },
+          { path: 'shortlists', lazy: () => import('./routes/shortlists').then((m) => ({ Component: m.ShortlistsRoute })) },
+          { path: 'shortlists/:id', lazy: () => import('./routes/shortlist').then((m) => ({ Component: m.ShortlistRoute })) },
+          { path: 'library', lazy: () => import('./routes/library').then((m) => ({ Component: m.LibraryRoute })) },
+          { path: 'find', lazy: () => import('./routes/find').then((m) => ({ Component: m.FindRoute })) },
           { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },
         ],
       },

@@ -1,0 +1,50 @@
+import { STATE_LABELS, type ObservedState } from '@shared/states';
+import type { ObservationView } from '@shared/views/team-data';
+import { ErrorState, Loading } from '@/components/ui/states';
+import { StateGlyph } from '@/components/ui/state-badge';
+import { formatDate, formatNumber } from '@/lib/format';
+import { useRecipeObservations } from '../api/get-recipe-observations';
+
+function countStates(items: ObservationView[]) {
+  const counts = new Map<ObservedState, number>();
+  for (const o of items) counts.set(o.observedState, (counts.get(o.observedState) ?? 0) + 1);
+  return [...counts.entries()].sort((a, b) => b[1] - a[1]);
+}
+
+/** What the bench saw for this recipe, in a sentence first and then one line per outcome. */
+export function BenchSummary({ recipeId }: { recipeId: number }) {
+  const observations = useRecipeObservations(recipeId);
+  if (observations.isPending) return <Loading label="Loading the bench record…" />;
+  if (observations.isError) return <ErrorState error={observations.error} retry={() => observations.refetch()} />;
+  const { items, total } = observations.data;
+  if (total === 0) return <p>Nobody has recorded an outcome for this recipe yet, so the prediction is untested.</p>;
+  const agree = items.filter((o) => o.agrees === true).length;
+  const disagree = items.filter((o) => o.agrees === false).length;
+  const states = countStates(items)
+    .map(([state, n]) => `${n} ${STATE_LABELS[state].toLowerCase()}`)
+    .join(', ');
+  return (
+    <div className="flex flex-col gap-2">
+      <p data-testid="bench-summary">
+        Observed {total === 1 ? 'once' : `${total} times`}
+        {total > items.length ? ` (the newest ${items.length} counted here)` : ''}: {states}. {agree} {agree === 1 ? 'agrees' : 'agree'} with the prediction, {disagree}{' '}
+        {disagree === 1 ? 'disagrees' : 'disagree'}
+        {items.length - agree - disagree > 0 ? `, ${items.length - agree - disagree} could not be compared` : ''}.
+      </p>
+      <ul className="flex flex-col gap-0.5 text-sm text-ink-soft" aria-label="Bench outcomes">
+        {items.map((o) => (
+          <li key={o.id}>
+            <span aria-hidden className={o.agrees === false ? 'font-semibold text-brick-700' : o.agrees ? 'text-leaf-700' : ''}>
+              {o.agrees === true ? '✓' : o.agrees === false ? '✕' : '–'}
+            </span>{' '}
+            <span className="inline-flex items-center gap-1 align-middle text-ink">
+              <StateGlyph state={o.observedState} size={9} />
+              {STATE_LABELS[o.observedState]}
+            </span> after {formatNumber(o.ageDays)} days (mixed {formatDate(o.mixedAt)}, {o.method})
+            {o.agrees === true ? ', agrees' : o.agrees === false ? ', disagrees' : ', not compared'}
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
