@@ -15,7 +15,7 @@ export function BenchLog({ programmeId }: { programmeId: number }) {
   return (
     <section aria-labelledby="bench-log-heading" className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <h2 id="bench-log-heading">Bench log</h2>
+        <h2 id="bench-log-heading">Observations</h2>
         <a href={observationExportUrl(filters)} download className="text-sm font-medium">
           Export these observations as CSV
         </a>

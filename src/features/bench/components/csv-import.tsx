@@ -1,6 +1,6 @@
 import { useRef, useState } from 'react';
 import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS } from '@shared/schemas/observations';
-import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES } from '@shared/states';
+import { OBSERVATION_METHODS, OBSERVED_STATES } from '@shared/states';
 import type { ImportReport } from '@shared/views/team-data';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
@@ -90,14 +90,13 @@ export function CsvImport({ onImported }: { onImported?: (report: ImportReport) 
               <code className="text-xs text-ink">{c}</code>
             </span>
           ))}
-          ; the first {REQUIRED_IMPORT_COLUMNS.length} are required, leave the others empty when not measured. Dates as 2026-03-14; states {OBSERVED_STATES.join(', ')}; methods{' '}
-          {OBSERVATION_METHODS.map((m) => `${m} (${METHOD_LABELS[m].toLowerCase()})`).join(', ')}. Up to {IMPORT_MAX_ROWS} rows.
+          ; the first {REQUIRED_IMPORT_COLUMNS.length} are required, leave the others empty when not measured. Dates as 2026-03-14; states {OBSERVED_STATES.join(', ')}; methods {OBSERVATION_METHODS.join(', ')}. Up to {IMPORT_MAX_ROWS} rows.
         </p>
         <p className="mt-1">
           <CsvTemplateLink />
         </p>
       </div>
-      <Field label="CSV file to import" hint="The file is checked first; nothing is written until you press Import.">
+      <Field label="CSV file to import" hint={<span className="text-ink-soft">The file is checked first; nothing is written until you press Import.</span>}>
         {(props) => (
           <input
             {...props}

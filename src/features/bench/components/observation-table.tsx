@@ -21,23 +21,24 @@ export function ObservationTable({ items }: { items: ObservationView[] }) {
     <Table caption="Bench log: observed outcomes, newest first">
       <thead>
         <tr>
-          <Th>Mixed on</Th>
+          <Th>Mixed on, by</Th>
           <Th>Recipe</Th>
           <Th className="text-right">Age (days)</Th>
           <Th>Observed</Th>
           <Th>Predicted</Th>
           <Th>Agreement</Th>
-          <Th>Method</Th>
-          <Th>Measured</Th>
-          <Th>Observer</Th>
+          <Th>Method, measured</Th>
           <Th>Files</Th>
         </tr>
       </thead>
       <tbody>
         {items.map((o) => (
           <tr key={o.id} className={o.agrees === false ? 'bg-brick-50/40' : ''}>
-            <Td className="whitespace-nowrap">{formatDate(o.mixedAt)}</Td>
-            <Td className="max-w-56">
+            <Td>
+              <span className="whitespace-nowrap">{formatDate(o.mixedAt)}</span>
+              <span className="block text-xs text-ink-soft">{o.observer?.name ?? 'someone no longer listed'}</span>
+            </Td>
+            <Td className="max-w-48">
               {o.recipeCode ? (
                 <Link to={`/recipes/${o.recipeCode}`} className="font-medium">
                   {o.recipeCode}
@@ -48,19 +49,20 @@ export function ObservationTable({ items }: { items: ObservationView[] }) {
               {o.notes && <p className="truncate text-xs text-ink-soft" title={o.notes}>{o.notes}</p>}
             </Td>
             <Td className="text-right tabular-nums">{formatNumber(o.ageDays)}</Td>
-            <Td>
+            <Td className="whitespace-nowrap">
               <StateBadge state={o.observedState} />
             </Td>
-            <Td>{o.predictedState ? <StateBadge state={o.predictedState} /> : <span className="text-xs text-ink-soft">No prediction</span>}</Td>
+            <Td className="whitespace-nowrap">{o.predictedState ? <StateBadge state={o.predictedState} /> : <span className="text-xs text-ink-soft">No prediction</span>}</Td>
             <Td>
               <AgreementMark agrees={o.agrees} />
             </Td>
-            <Td className="whitespace-nowrap">{METHOD_LABELS[o.method]}</Td>
-            <Td className="whitespace-nowrap text-xs">{measured(o).join(' · ') || <span className="text-ink-faint">—</span>}</Td>
-            <Td className="whitespace-nowrap">{o.observer?.name ?? '—'}</Td>
-            <Td className="max-w-40 text-xs">
+            <Td>
+              <span className="whitespace-nowrap">{METHOD_LABELS[o.method]}</span>
+              {measured(o).length > 0 && <span className="block whitespace-nowrap text-xs text-ink-soft">{measured(o).join(' · ')}</span>}
+            </Td>
+            <Td className="max-w-32 text-xs">
               {o.attachments.length === 0 ? (
-                <span className="text-ink-faint">—</span>
+                <span className="text-ink-soft">—</span>
               ) : (
                 <ul>
                   {o.attachments.map((a) => (

@@ -23,15 +23,16 @@ export function RecipeChooser({ programmeId, control, onChosen }: { programmeId:
   const found = choices.data?.items ?? [];
   const options = chosen && !found.some((r) => r.id === chosen.id) ? [chosen, ...found] : found;
   const more = choices.data && choices.data.total > found.length ? choices.data.total - found.length : 0;
+  const chooserHint = choices.isError ? 'The recipes could not be loaded; try again.' : more ? `${more} more match; type more of the code or name` : found.length === 0 && choices.data ? 'No recipe matches this text' : null;
   return (
     <div className="grid gap-4 md:grid-cols-[14rem_1fr]">
-      <Field label="Find the recipe" hint="Code, or part of the name or notes">
+      <Field label="Find the recipe" hint={<span className="text-ink-soft">Code, or part of the name or notes</span>}>
         {(props) => <TextInput {...props} type="search" value={text} onChange={(event) => setText(event.target.value)} placeholder="e.g. HB-0012" />}
       </Field>
       <Field
         label="Recipe"
         error={fieldState.error?.message}
-        hint={choices.isError ? 'The recipes could not be loaded; try again.' : more ? `${more} more match; type more of the code or name` : found.length === 0 && choices.data ? 'No recipe matches this text' : undefined}
+        hint={chooserHint && <span className="text-ink-soft">{chooserHint}</span>}
       >
         {(props) => (
           <SelectInput

@@ -91,7 +91,7 @@ export function RecordOutcomeForm({ programmeId }: { programmeId: number }) {
         <Field label="Age when observed (days)" error={formState.errors.ageDays?.message}>
           {(props) => <TextInput {...props} type="number" min={0} step="any" {...register('ageDays', { setValueAs: requiredNumber })} />}
         </Field>
-        <Field label="Observed state" error={formState.errors.observedState?.message} hint={state ? STATE_DESCRIPTIONS[state as keyof typeof STATE_DESCRIPTIONS] : undefined}>
+        <Field label="Observed state" error={formState.errors.observedState?.message} hint={state ? <span className="text-ink-soft">{STATE_DESCRIPTIONS[state as keyof typeof STATE_DESCRIPTIONS]}</span> : undefined}>
           {(props) => (
             <SelectInput {...props} {...register('observedState')}>
               <option value="">Choose a state</option>

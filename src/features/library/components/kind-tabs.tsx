@@ -21,7 +21,7 @@ export function KindTabs({ current, onChange }: { current: MaterialKind; onChang
     refs.current[kind]?.focus();
   };
   return (
-    <div role="tablist" aria-label="Kinds of material" className="inline-flex rounded-md border border-line bg-panel p-1">
+    <div role="tablist" aria-label="Kinds of material" className="inline-flex self-start rounded-md border border-line bg-panel p-1">
       {MATERIAL_KINDS.map((kind, index) => (
         <button
           key={kind}

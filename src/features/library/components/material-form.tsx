@@ -62,7 +62,7 @@ export function MaterialForm<K extends MaterialKind>({ kind, entry, onSaved, onC
         </Notice>
       )}
       {spec.fields.map((field) => (
-        <Field key={field.name} label={field.label} hint={field.hint} error={formState.errors[field.name]?.message as string | undefined} className={field.wide ? 'md:col-span-3' : ''}>
+        <Field key={field.name} label={field.label} hint={field.hint && <span className="text-ink-soft">{field.hint}</span>} error={formState.errors[field.name]?.message as string | undefined} className={field.wide ? 'md:col-span-3' : ''}>
           {(props) =>
             field.type === 'textarea' ? (
               <TextArea {...props} {...register(field.name)} />

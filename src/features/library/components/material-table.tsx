@@ -13,6 +13,15 @@ function cellText(field: MaterialField, value: unknown): string {
   return String(value);
 }
 
+/** A column head kept in its own case: upper-casing would turn nm into NM and mPa·s into MPA·S. */
+function UnitTh({ children }: { children: string }) {
+  return (
+    <th scope="col" className="border-b border-line bg-paper px-3 py-2 text-left text-xs font-semibold text-ink-soft">
+      {children}
+    </th>
+  );
+}
+
 /** One kind's entries; the action column appears only for roles that may edit the library. */
 export function MaterialTable<K extends MaterialKind>({
   kind,
@@ -38,9 +47,7 @@ export function MaterialTable<K extends MaterialKind>({
       <thead>
         <tr>
           {columns.map((field) => (
-            <Th key={field.name} className="normal-case tracking-normal">
-              {field.label}
-            </Th>
+            <UnitTh key={field.name}>{field.label}</UnitTh>
           ))}
           {canWrite && (
             <Th>

@@ -38,7 +38,7 @@ export function ProgrammeForm({ onCreated }: { onCreated?: (programme: Programme
       <Field label="Name" error={formState.errors.name?.message}>
         {(props) => <TextInput {...props} {...register('name')} />}
       </Field>
-      <Field label="Code prefix" hint="2 to 5 letters; recipe codes start with it" error={formState.errors.codePrefix?.message}>
+      <Field label="Code prefix" hint={<span className="text-ink-soft">2 to 5 letters; recipe codes start with it</span>} error={formState.errors.codePrefix?.message}>
         {(props) => <TextInput {...props} className="uppercase" {...register('codePrefix')} />}
       </Field>
       <Field label="Goal state" error={formState.errors.goalState?.message}>

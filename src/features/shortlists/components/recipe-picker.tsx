@@ -24,7 +24,7 @@ export function RecipePicker({ programmeId, chosen, onAdd }: { programmeId: numb
   const open = recipes.data.items.filter((r) => !chosen.has(r.id) && matches(r, text));
   return (
     <div className="flex flex-col gap-2">
-      <Field label="Find recipes to add" hint="Code or part of the name">
+      <Field label="Find recipes to add" hint={<span className="text-ink-soft">Code or part of the name</span>}>
         {(props) => <TextInput {...props} type="search" value={text} onChange={(event) => setText(event.target.value)} />}
       </Field>
       {recipes.data.items.length === 0 ? (
@@ -39,7 +39,7 @@ export function RecipePicker({ programmeId, chosen, onAdd }: { programmeId: numb
                 <span className="font-medium">{recipe.code}</span> <span className="text-ink-soft">{recipe.name}</span>
                 <span className="block text-xs text-ink-soft">
                   {recipe.derived.predictedState ? `Predicted ${STATE_LABELS[recipe.derived.predictedState].toLowerCase()}` : 'No prediction'} · φ {formatNumber(recipe.derived.phi)}
-                  {recipe.derived.margin !== null ? ` · margin ${formatNumber(recipe.derived.margin, 2)}` : ''}
+                  {recipe.derived.margin !== null ? ` · margin ${formatNumber(recipe.derived.margin * 100, 2)} % of the map` : ''}
                 </span>
               </span>
               <Button variant="secondary" size="sm" aria-label={`Add ${recipe.code}`} onClick={() => onAdd(recipe)}>

@@ -82,7 +82,7 @@ export function ShortlistForm({
             </SelectInput>
           )}
         </Field>
-        <Field label="Purpose" className="md:col-span-2" hint="What these recipes are for, and what the manager should weigh" error={formState.errors.purpose?.message}>
+        <Field label="Purpose" className="md:col-span-2" hint={<span className="text-ink-soft">What these recipes are for, and what the manager should weigh</span>} error={formState.errors.purpose?.message}>
           {(props) => <TextArea {...props} {...register('purpose')} />}
         </Field>
       </div>

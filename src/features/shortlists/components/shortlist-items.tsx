@@ -36,9 +36,10 @@ export function ShortlistItems({ items, targetState }: { items: ShortlistItemVie
                   </dd>
                   <dt className="text-ink-soft">Margin</dt>
                   <dd>
-                    {recipe.derived.margin !== null ? formatNumber(recipe.derived.margin, 2) : '—'}
-                    {recipe.derived.marginDescription && <span className="text-ink-soft"> · {recipe.derived.marginDescription}</span>}
-                    {recipe.derived.nearestBoundary && <span className="text-ink-soft"> (nearest: {recipe.derived.nearestBoundary.label})</span>}
+                    {recipe.derived.margin !== null && recipe.derived.nearestBoundary
+                      ? `${formatNumber(recipe.derived.margin * 100, 2)} % of the map from ${recipe.derived.nearestBoundary.label}`
+                      : 'No boundary named'}
+                    {recipe.derived.marginDescription && <span className="block text-xs text-ink-soft">{recipe.derived.marginDescription}</span>}
                   </dd>
                   <dt className="text-ink-soft">Reason</dt>
                   <dd className="whitespace-pre-line">{item.reason}</dd>

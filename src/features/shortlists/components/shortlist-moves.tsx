@@ -112,7 +112,7 @@ function DecisionPanel({ shortlist, moves }: { shortlist: ShortlistView; moves: 
           {problem}
         </Notice>
       )}
-      <Field label="Comment for the author" hint={moves.return ? 'Needed to return the shortlist; optional when approving' : 'Optional'} error={fieldError}>
+      <Field label="Comment for the author" hint={<span className="text-ink-soft">{moves.return ? 'Needed to return the shortlist; optional when approving' : 'Optional'}</span>} error={fieldError}>
         {(props) => <TextArea {...props} value={comment} onChange={(event) => setComment(event.target.value)} />}
       </Field>
       <div className="mt-3 flex flex-wrap gap-2">
