@@ -21,7 +21,7 @@ export function FindRoute() {
       <div className="mb-6">
         <FindBox key={q} initial={q} onSearch={(text) => setParams(!text ? {} : CODE.test(text) ? { q: text, code: text.toUpperCase() } : { q: text })} />
       </div>
-      <div className="grid gap-6 lg:grid-cols-[20rem_1fr]">
+      <div className="grid gap-6 lg:grid-cols-[17rem_1fr]">
         <ResultList q={q} selected={code} programmeName={programmeName} hrefFor={(recipe) => `/find?${new URLSearchParams({ q, code: recipe.code })}`} />
         {code ? (
           <RecipeExplanation code={code} programmeName={programmeName} cautions={<SafetyNote />} />

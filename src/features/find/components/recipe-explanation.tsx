@@ -8,6 +8,10 @@ import { ErrorState, Loading } from '@/components/ui/states';
 import { formatDate, formatNumber } from '@/lib/format';
 import { useRecipeByCode } from '../api/get-recipe-by-code';
 import { BenchSummary } from './bench-summary';
+import { termsIn } from './glossary';
+
+/** Within 5 % of the map's size from a boundary, a recipe is called close (the margin is in normalised map units). */
+const CLOSE_MARGIN = 0.05;
 
 /** Each derived number with what it means, for someone meeting colloid jargon for the first time. */
 function numbers(recipe: RecipeView): { label: string; value: string; meaning: string }[] {
@@ -39,6 +43,7 @@ export function RecipeExplanation({ code, programmeName, cautions }: { code: str
   if (query.isError) return <ErrorState error={query.error} retry={() => query.refetch()} />;
   const recipe = query.data;
   const d = recipe.derived;
+  const terms = termsIn(d.reason, d.nearestBoundary?.label);
   return (
     <article aria-labelledby="explained-recipe" className="flex flex-col gap-4">
       <Card>
@@ -75,18 +80,25 @@ export function RecipeExplanation({ code, programmeName, cautions }: { code: str
           </Part>
 
           <Part title="How close it is to another state">
-            {d.nearestBoundary ? (
+            {d.nearestBoundary && d.margin !== null ? (
               <p data-testid="nearest-boundary">
-                The nearest boundary on the map is <span className="font-medium">{d.nearestBoundary.label}</span>
-                {d.margin !== null ? `, at a margin of ${formatNumber(d.margin, 2)}` : ''}. {d.marginDescription}
+                The nearest boundary on the map is <span className="font-medium">{d.nearestBoundary.label}</span>, {formatNumber(d.margin * 100, 2)} % of the map's size away.{' '}
+                {d.margin < CLOSE_MARGIN
+                  ? 'That is close: a small change in the recipe, or in how it is made, could put it in another state. Check it on the bench.'
+                  : 'That is not close on this map, but the lines are approximate.'}
               </p>
             ) : (
-              <p>{d.marginDescription ?? 'The prediction names no nearby boundary.'}</p>
+              <p data-testid="nearest-boundary">The prediction names no boundary nearby on this map.</p>
+            )}
+            {d.marginDescription && (
+              <p className="text-xs text-ink-soft" data-testid="margin-description">
+                In map terms: {d.marginDescription}
+              </p>
             )}
           </Part>
 
           <Part title="The numbers behind it">
-            <dl className="grid gap-x-4 gap-y-2 text-sm md:grid-cols-[16rem_8rem_1fr]">
+            <dl className="grid gap-x-4 gap-y-2 text-sm md:grid-cols-[13rem_10rem_1fr]">
               {numbers(recipe).map((row) => (
                 <div key={row.label} className="contents">
                   <dt className="font-medium">{row.label}</dt>
@@ -95,12 +107,25 @@ export function RecipeExplanation({ code, programmeName, cautions }: { code: str
                 </div>
               ))}
             </dl>
-            <p className="text-xs text-ink-faint">
+            <p className="text-xs text-ink-soft">
               Computed with model {d.modelVersion}
               {d.map.theory ? ` (${d.map.theory})` : ''}
               {d.calibration ? `, with the programme's calibration accepted ${formatDate(d.calibration.acceptedAt)}` : ', without a calibration to the bench'}. The lines of the map are approximate.
             </p>
           </Part>
+
+          {terms.length > 0 && (
+            <Part title="Words used above">
+              <dl className="text-sm">
+                {terms.map((t) => (
+                  <div key={t.term}>
+                    <dt className="inline font-medium">{t.term}: </dt>
+                    <dd className="inline">{t.meaning}</dd>
+                  </div>
+                ))}
+              </dl>
+            </Part>
+          )}
 
           {d.warnings.length > 0 && (
             <Part title="Take note">
