@@ -1,0 +1,286 @@
+import { asakuraOosawaReducedB2 } from '../attraction/asakura-oosawa-reduced-b2';
+import { freeVolumeCriticalEndpoint } from '../depletion/free-volume-critical-endpoint';
+import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
+import { PhysicsArgumentError } from '../validation/physics-argument-error';
+import { requireInRange } from '../validation/require-in-range';
+import { buildAxis } from './build-axis';
+import { resolveClassifierParameters } from './classifier-parameters';
+import { curveAt, domeAt } from './state-rule';
+import { buildDrawnCurves, type DrawnCurve } from './drawn-curves';
+import { genericLevelPhysics, depletionLevelPhysics } from './level-physics';
+import { createMapFrame, type MapFrame, type ReducedB2Table } from './map-frame';
+import { stateAtDrawnPoint } from './map-state-at';
+import { PHYSICS_MODEL_VERSION } from './model-version';
+import { splitByFlag } from './polyline-tools';
+import { causeOnRow, emptyRow, ruleRowAt, stateOfCause, type StateCause } from './state-rule';
+import { resolveMapModel } from './resolve-map-model';
+import { traceTheoryCurves, type TheoryCurves } from './theory-curves';
+import type {
+  ClassifierParameters,
+  ClassifierTables,
+  MapBoundary,
+  MapMarker,
+  MapModel,
+  MapPoint,
+  StateMap,
+  StateMapOptions,
+  StateRegions,
+} from './types';
+
+/** Sticky-sphere critical point from simulation (Miller & Frenkel, PRL 90, 135702 (2003), from memory). */
+export const SIMULATION_CRITICAL_POINT = { phi: 0.266, tau: 0.1133 };
+
+const STATE_CODES: StateRegions['codes'] = ['fluid', 'gel', 'glass', 'crystal', 'separated', 'crystal-suppressed'];
+const STATE_LABELS: StateRegions['labels'] = {
+  fluid: 'Fluid',
+  gel: 'Gel (arrested phase separation)',
+  glass: 'Glass (repulsive or attractive)',
+  crystal: 'Crystal (or fluid–crystal coexistence)',
+  separated: 'Separated (slow nucleated phase separation)',
+  'crystal-suppressed': 'Crystal suppressed by polydispersity (classified as fluid)',
+};
+
+const CODE_OF_CAUSE: Record<StateCause, number> = {
+  fluid: 0,
+  'gel-spinodal': 1,
+  'gel-binodal': 1,
+  'glass-attractive': 2,
+  'glass-repulsive': 2,
+  crystal: 3,
+  'crystal-coexistence': 3,
+  separated: 4,
+  'fluid-suppressed': 5,
+};
+
+/**
+ * Build the state map of a model: every boundary as polylines in map coordinates, markers, a
+ * region grid for shading, notes and the tables the fast classifier uses. Pure and
+ * JSON-serialisable.
+ *
+ * Coordinates: x is φ on [0, φ_cp = 0.7405]; y is the axis of the model (B2*, 1/τ, U/kT at range
+ * λ, or φ_p^R) from the weakest attraction (bottom) to the strongest (top; B2* = −10 unless
+ * `yMax`). For the B2* axis larger values are drawn lower: `y.inverted` is true. "Normalised"
+ * coordinates, used for margins, are x/φ_cp and u = (y − y.weakest)/(y.strongest − y.weakest).
+ *
+ * Physics per model (physics.md): generic/meanField — CS + mean-field B2* binodal and spinodal;
+ * generic/baxterPY — Percus–Yevick adhesive spheres (compressibility route; the dilute spinodal
+ * branch is the edge of the no-solution band); both generic theories take their fluid–crystal
+ * lines from the mean-field free energy with the cell-model crystal; depletion — free-volume
+ * theory at size ratio q. Percolation is Chiew–Glandt's, placed through B2*; glass lines and the
+ * gel threshold come from the classifier parameters. The attraction shift of the parameters moves
+ * every theory boundary: a boundary at B2* is drawn at B2* + attractionShift.
+ *
+ * Numerics: `levels` attraction levels (default 200) uniform in y; coexistence by continuation
+ * from the level below (Newton) with a bracketing fallback; residuals |Δp̃|, |Δβμ| ≲ 1e-12.
+ *
+ * @param model the map model (see MapModel).
+ * @param options levels (20–2000), classifier parameters, polydispersity (0–100 %), yMax,
+ *   grid size (columns 10–1000, rows 10–1000).
+ * @throws PhysicsArgumentError naming the bad field (model.q, model.lambda, options.levels …).
+ * @example buildStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }).markers[0]
+ * // { id: 'critical-point', label: 'Critical point (mean field)', x: 0.13044, y: -1.65031 }
+ */
+export function buildStateMap(model: MapModel, options: StateMapOptions = {}): StateMap {
+  const resolved = resolveMapModel(model);
+  const levels = requireInteger('options.levels', options.levels ?? 200, 20, 2000);
+  const columns = requireInteger('options.gridColumns', options.gridColumns ?? 160, 10, 1000);
+  const rows = requireInteger('options.gridRows', options.gridRows ?? 100, 10, 1000);
+  const parameters = resolveClassifierParameters(options.parameters);
+  const polydispersity = options.polydispersity === undefined ? null : requireInRange('options.polydispersity', options.polydispersity, 0, 100, { what: 'a size polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
+  const crystalSuppressed = polydispersity !== null && polydispersity > parameters.polydispersityCrystalThreshold;
+
+  const axis = buildAxis(resolved, options.yMax);
+  const levelsU = Array.from({ length: levels }, (_, i) => i / (levels - 1));
+  const table: ReducedB2Table | undefined = resolved.kind === 'depletion'
+    ? { u: levelsU, b2: levelsU.map((u) => asakuraOosawaReducedB2(resolved.q, axis.weakest + u * (axis.strongest - axis.weakest))) }
+    : undefined;
+  const theory = createMapFrame(resolved, axis, 0, table);
+  const drawn = createMapFrame(resolved, axis, parameters.attractionShift, table);
+  const physics = resolved.kind === 'generic' ? genericLevelPhysics(resolved.theory, theory) : depletionLevelPhysics(resolved.q, theory);
+  const traced = traceTheoryCurves(physics, levelsU);
+
+  const partial = { binodal: traced.binodal, spinodal: traced.spinodal, freezing: traced.freezing, melting: traced.melting };
+  const names = modelNames(resolved);
+  const curves = buildDrawnCurves(partial, theory, drawn, parameters, names);
+  const tables: ClassifierTables = { ...partial, ...(table ? { reducedB2: table } : {}), curves, active: [] };
+  const stateAt = (phi: number, y: number) => stateOfCause(stateAtDrawnPoint(tables, theory, drawn, parameters, crystalSuppressed, phi, y));
+  tables.active = curves.map((curve) => activeSegments(curve, drawn, stateAt));
+
+  return {
+    modelVersion: PHYSICS_MODEL_VERSION,
+    model: resolved,
+    modelName: names.model,
+    parameters,
+    polydispersity,
+    crystalSuppressed,
+    levels,
+    x: { label: 'φ', quantity: 'particle volume fraction', unit: '', domain: [0, FCC_CLOSE_PACKING], inverted: false, weakest: 0, strongest: FCC_CLOSE_PACKING },
+    y: axis,
+    boundaries: drawnBoundaries(curves, tables, theory, drawn),
+    markers: buildMarkers(resolved, traced, theory, drawn, names),
+    regions: buildRegions(tables, theory, drawn, parameters, crystalSuppressed, columns, rows),
+    notes: buildNotes(resolved, traced, theory, parameters, polydispersity, crystalSuppressed),
+    tables,
+  };
+}
+
+function requireInteger(argument: string, value: number, low: number, high: number): number {
+  requireInRange(argument, value, low, high, { what: 'an integer', lowEnd: 'closed', highEnd: 'closed' });
+  if (!Number.isInteger(value)) throw new PhysicsArgumentError(argument, `an integer in [${low}, ${high}]`, value);
+  return value;
+}
+
+function modelNames(model: MapModel): { model: string; binodal: string; spinodal: string; critical: string } {
+  if (model.kind === 'depletion') {
+    return {
+      model: `Colloid + ideal polymer, free-volume theory (q = ${model.q})`,
+      binodal: 'Gas–liquid binodal (free-volume theory)',
+      spinodal: 'Spinodal (free-volume theory)',
+      critical: 'Critical point (free-volume theory)',
+    };
+  }
+  if (model.theory === 'meanField') {
+    return {
+      model: 'Short-range attraction by B2*: Carnahan–Starling + mean-field attraction',
+      binodal: 'Fluid–fluid binodal (mean field, approximate)',
+      spinodal: 'Spinodal (mean field)',
+      critical: 'Critical point (mean field)',
+    };
+  }
+  return {
+    model: 'Short-range attraction by B2*: Baxter adhesive spheres, Percus–Yevick',
+    binodal: 'Fluid–fluid binodal (Percus–Yevick, compressibility route)',
+    spinodal: 'Limit of stability (Percus–Yevick; dilute side: edge of the no-solution band)',
+    critical: 'Critical point (Percus–Yevick)',
+  };
+}
+
+/** 1 for segments across which the predicted state changes, tested just off both sides. */
+function activeSegments(curve: DrawnCurve, drawn: MapFrame, stateAt: (phi: number, y: number) => string): number[] {
+  const flags: number[] = [];
+  const offset = 5e-4;
+  for (let i = 0; i + 1 < curve.points.length; i++) {
+    const [phiA, yA] = curve.points[i];
+    const [phiB, yB] = curve.points[i + 1];
+    const ax = phiA / FCC_CLOSE_PACKING;
+    const bx = phiB / FCC_CLOSE_PACKING;
+    const au = drawn.uFromY(yA);
+    const bu = drawn.uFromY(yB);
+    const length = Math.hypot(bx - ax, bu - au);
+    if (length === 0) { flags.push(0); continue; }
+    const mx = 0.5 * (ax + bx);
+    const mu = 0.5 * (au + bu);
+    const nx = -(bu - au) / length;
+    const nu = (bx - ax) / length;
+    const side = (sign: number) => {
+      const x = Math.min(Math.max(mx + sign * offset * nx, 1e-9), 1 - 1e-9);
+      return stateAt(x * FCC_CLOSE_PACKING, drawn.yFromU(mu + sign * offset * nu));
+    };
+    flags.push(side(1) === side(-1) ? 0 : 1);
+  }
+  return flags;
+}
+
+/**
+ * Drawn pieces with metastable flags: binodal and spinodal segments where the crystal is more
+ * stable than the fluid; percolation segments inside the binodal or where the crystal wins.
+ */
+function drawnBoundaries(curves: DrawnCurve[], tables: ClassifierTables, theory: MapFrame, drawn: MapFrame): MapBoundary[] {
+  const theoryU = (y: number) => (drawn.shift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(drawn.b2FromY(y) - drawn.shift)));
+  // The fluid is metastable wherever φ lies above the fluid side of fluid–crystal coexistence
+  // (inside coexistence or in the crystal itself).
+  const crystalMoreStable = (phi: number, u0: number) => phi > curveAt(tables.freezing, u0);
+  const insideBinodal = (phi: number, u0: number) => {
+    const dome = domeAt(tables.binodal, u0);
+    return dome !== null && phi > dome[0] && phi < dome[1];
+  };
+  const boundaries: MapBoundary[] = [];
+  for (const curve of curves) {
+    const approximate = curve.id === 'attractive-glass' || curve.id === 'gel';
+    const metastableTest = curve.id === 'binodal' || curve.id === 'spinodal'
+      ? (a: MapPoint, b: MapPoint) => crystalMoreStable(0.5 * (a[0] + b[0]), theoryU(0.5 * (a[1] + b[1])))
+      : curve.id === 'percolation'
+        ? (a: MapPoint, b: MapPoint) => {
+            const phi = 0.5 * (a[0] + b[0]);
+            const u0 = theoryU(0.5 * (a[1] + b[1]));
+            return insideBinodal(phi, u0) || crystalMoreStable(phi, u0);
+          }
+        : () => false;
+    for (const run of splitByFlag(curve.points, metastableTest)) {
+      boundaries.push({ id: curve.id, label: curve.label, points: run.points.map((point): MapPoint => [point[0], point[1]]), metastable: run.flag, approximate });
+    }
+  }
+  return boundaries;
+}
+
+function buildMarkers(model: MapModel, traced: TheoryCurves, theory: MapFrame, drawn: MapFrame, names: { critical: string }): MapMarker[] {
+  const markers: MapMarker[] = [];
+  if (traced.binodal) {
+    markers.push({ id: 'critical-point', label: names.critical, x: traced.binodal.left.phi[0], y: drawn.drawnYFromTheoryU(traced.binodal.bottom) });
+  }
+  const simulationB2 = 1 - 1 / (4 * SIMULATION_CRITICAL_POINT.tau);
+  const simulationY = drawn.yFromB2(simulationB2 + drawn.shift);
+  markers.push({
+    id: 'simulation-critical-point',
+    label: `Sticky-sphere critical point from simulation (τ = ${SIMULATION_CRITICAL_POINT.tau}, B2* = ${simulationB2.toFixed(3)}; Miller & Frenkel 2003)`,
+    x: SIMULATION_CRITICAL_POINT.phi,
+    y: simulationY,
+  });
+  if (traced.triple) {
+    const t = traced.triple;
+    markers.push({
+      id: 'triple-point',
+      label: `Gas–liquid–crystal triple point (gas φ = ${t.gas.toPrecision(3)}, liquid ${t.liquid.toPrecision(3)}, crystal ${t.solid.toPrecision(3)})`,
+      x: t.liquid,
+      y: drawn.drawnYFromTheoryU(t.u),
+    });
+  }
+  void theory;
+  void model;
+  return markers;
+}
+
+function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFrame, parameters: ClassifierParameters, crystalSuppressed: boolean, columns: number, rows: number): StateRegions {
+  const cells = new Array<number>(columns * rows);
+  const row = emptyRow();
+  for (let r = 0; r < rows; r++) {
+    // Every cell of a row shares its attraction, hence its thresholds.
+    const y = drawn.yFromU((r + 0.5) / rows);
+    const effectiveB2 = drawn.b2FromY(y) - drawn.shift;
+    const u0 = drawn.shift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(effectiveB2));
+    ruleRowAt(tables, u0, effectiveB2, row);
+    for (let column = 0; column < columns; column++) {
+      const phi = ((column + 0.5) / columns) * FCC_CLOSE_PACKING;
+      cells[r * columns + column] = CODE_OF_CAUSE[causeOnRow(row, parameters, crystalSuppressed, phi)];
+    }
+  }
+  return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells };
+}
+
+function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, parameters: ClassifierParameters, polydispersity: number | null, crystalSuppressed: boolean): string[] {
+  const notes = [
+    'Approximate: predictions come from published theory and the team\'s calibration; they do not replace stability testing.',
+  ];
+  if (model.kind === 'generic') {
+    notes.push('Any short-range attraction is placed by its reduced second virial coefficient B2* (extended law of corresponding states, Noro & Frenkel 2000).');
+    notes.push(model.theory === 'meanField'
+      ? 'Fluid–fluid lines: Carnahan–Starling fluid with a mean-field attraction fixed by B2* (the approximate binodal).'
+      : 'Fluid–fluid lines: Baxter adhesive spheres in the Percus–Yevick approximation (compressibility route); on the dilute side the limit of stability is the edge of the band where the theory has no solution.');
+    notes.push('Fluid–crystal lines: the same mean-field attraction applied to the Carnahan–Starling fluid and the cell-model crystal (approximate for short-range attraction, which widens coexistence more).');
+    if (model.theory === 'baxterPY' && traced.binodal && traced.binodalTop !== null && traced.binodalTop < 1) {
+      const b2 = theory.b2FromY(theory.yFromU(traced.binodalTop));
+      notes.push(`The Percus–Yevick binodal has no solution beyond B2* ≈ ${b2.toFixed(2)} (τ ≈ ${(1 / (4 * (1 - b2))).toFixed(4)}); it is drawn up to there and the classifier keeps its last width above.`);
+    }
+  } else {
+    const endpoint = freeVolumeCriticalEndpoint();
+    notes.push(`Free-volume theory (Lekkerkerker et al. 1992) for colloids with ideal polymer at size ratio q = ${model.q}; attraction is the Asakura–Oosawa depletion potential.`);
+    notes.push(model.q > endpoint
+      ? `q above the critical endpoint (${endpoint.toFixed(4)}): a stable gas–liquid region exists up to the triple point.`
+      : `q below the critical endpoint (${endpoint.toFixed(4)}): the gas–liquid binodal is metastable inside fluid–crystal coexistence and is drawn dashed.`);
+    if (model.q > 0.6) notes.push('Size ratios above about 0.6 stretch the ideal-polymer, free-volume description; treat the lines as indicative.');
+  }
+  notes.push(`Glass lines: repulsive glass at φ = ${parameters.glassPhi}; the attractive-glass line and the gel threshold (B2* = ${parameters.gelB2Threshold}) are approximate placeholders for calibration.`);
+  if (parameters.attractionShift !== 0) notes.push(`Attraction scale shifted by ${parameters.attractionShift} in B2* (calibration): every theory boundary is drawn at B2* + ${parameters.attractionShift}.`);
+  if (crystalSuppressed) notes.push(`Polydispersity ${polydispersity} % exceeds ${parameters.polydispersityCrystalThreshold} %: crystallisation is suppressed; the crystal region is greyed and classified as fluid (glass above φ = ${parameters.glassPhi}).`);
+  return notes;
+}

@@ -1,0 +1,75 @@
+import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
+import { attractiveGlassLineB2 } from './classifier-parameters';
+import { domeAt } from './state-rule';
+import type { MapFrame } from './map-frame';
+import { clipPolyline } from './polyline-tools';
+import type { BoundaryId, ClassifierParameters, ClassifierTables, DomeCurve, LevelCurve, MapPoint } from './types';
+import { baxterPercolationStickiness } from '../fluid-fluid/baxter-percolation-stickiness';
+
+export type DrawnCurve = ClassifierTables['curves'][number];
+
+/**
+ * Every boundary as a polyline in map units (drawn frame: the attraction shift applied), clipped
+ * to the y domain. Internal.
+ */
+export function buildDrawnCurves(
+  tables: Pick<ClassifierTables, 'binodal' | 'spinodal' | 'freezing' | 'melting'>,
+  theory: MapFrame,
+  drawn: MapFrame,
+  parameters: ClassifierParameters,
+  labels: { binodal: string; spinodal: string },
+): DrawnCurve[] {
+  const curves: DrawnCurve[] = [];
+  const shift = drawn.shift;
+  const toPoint = (phi: number, u0: number): MapPoint => [phi, drawn.drawnYFromTheoryU(u0)];
+  const add = (id: BoundaryId, label: string, shape: DrawnCurve['shape'], points: MapPoint[]) => {
+    for (const inY of clipPolyline(points, (point) => drawn.uFromY(point[1]), 0, 1)) {
+      for (const run of clipPolyline(inY, (point) => point[0], 0, FCC_CLOSE_PACKING)) curves.push({ id, label, shape, points: run });
+    }
+  };
+  const domePoints = (dome: DomeCurve): MapPoint[] => {
+    const left = dome.left.u.map((u, i) => toPoint(dome.left.phi[i], u)).reverse();
+    const right = dome.right.u.slice(1).map((u, i) => toPoint(dome.right.phi[i + 1], u));
+    return [...left, ...right];
+  };
+  const levelPoints = (curve: LevelCurve): MapPoint[] => curve.u.map((u, i) => toPoint(curve.phi[i], u));
+
+  if (tables.binodal && tables.binodal.left.u.length > 1) add('binodal', labels.binodal, 'dome', domePoints(tables.binodal));
+  if (tables.spinodal && tables.spinodal.left.u.length > 1) add('spinodal', labels.spinodal, 'dome', domePoints(tables.spinodal));
+  add('freezing', 'Freezing (fluid side of fluid–crystal coexistence)', 'phiOfY', levelPoints(tables.freezing));
+  add('melting', 'Melting (crystal side of fluid–crystal coexistence)', 'phiOfY', levelPoints(tables.melting));
+
+  const samples = 160;
+  const percolation: MapPoint[] = [];
+  for (let i = 0; i <= samples; i++) {
+    const phi = 0.001 + ((FCC_CLOSE_PACKING - 0.002) * i) / samples;
+    const b2 = 1 - 1 / (4 * baxterPercolationStickiness(phi));
+    percolation.push([phi, drawn.yFromB2(b2 + shift)]);
+  }
+  add('percolation', 'Percolation (Chiew–Glandt, Percus–Yevick)', 'yOfPhi', percolation);
+
+  const onsetY = drawn.yFromB2(parameters.attractiveGlassB2 + shift);
+  const onsetU = Math.min(Math.max(drawn.uFromY(onsetY), 0), 1);
+  add('repulsive-glass', `Repulsive glass (φ = ${parameters.glassPhi})`, 'phiOfY', [
+    [parameters.glassPhi, drawn.yFromU(0)],
+    [parameters.glassPhi, drawn.yFromU(onsetU)],
+  ]);
+
+  const attractive: MapPoint[] = [];
+  for (let i = 0; i <= samples; i++) {
+    const phi = (FCC_CLOSE_PACKING * i) / samples;
+    attractive.push([phi, drawn.yFromB2(attractiveGlassLineB2(phi, parameters) + shift)]);
+  }
+  add('attractive-glass', 'Attractive glass (approximate)', 'yOfPhi', attractive);
+
+  const gelU0 = theory.uFromY(theory.yFromB2(parameters.gelB2Threshold));
+  const gelBinodal = domeAt(tables.binodal, gelU0);
+  if (gelBinodal && gelBinodal[0] < parameters.glassPhi) {
+    const y = drawn.yFromB2(parameters.gelB2Threshold + shift);
+    add('gel', `Gel threshold inside the binodal (B2* = ${parameters.gelB2Threshold}, approximate)`, 'yOfPhi', [
+      [gelBinodal[0], y],
+      [Math.min(gelBinodal[1], parameters.glassPhi), y],
+    ]);
+  }
+  return curves;
+}

@@ -1,0 +1,85 @@
+import { describeCause } from './describe-cause';
+import { formatNumber } from './format-number';
+import { emptyRow, type RuleRow, type StateCause } from './state-rule';
+import type { BoundaryId, ClassifiedPoint, ClassifierParameters, PredictedState } from './types';
+
+/**
+ * The result of classifyPoint. `state`, `nearestBoundary` and `margin` are plain fields;
+ * `reason` and `marginDescription` are written on first read (formatting numbers for 100 000
+ * points would cost more than classifying them). `toJSON()` — used by JSON.stringify and
+ * Express's res.json — returns a plain object with all five fields; use it, not object spread
+ * (which copies only own fields), when a plain copy is needed.
+ */
+export class PointClassification implements ClassifiedPoint {
+  readonly state: PredictedState;
+  readonly nearestBoundary: { readonly id: BoundaryId; readonly label: string };
+  readonly margin: number;
+  readonly #cause: StateCause;
+  readonly #row: RuleRow = emptyRow();
+  readonly #phi: number;
+  readonly #parameters: ClassifierParameters;
+  readonly #polydispersity: number | null;
+  readonly #yLabel: string;
+  readonly #deltaPhi: number;
+  readonly #deltaY: number;
+  #reason: string | undefined;
+  #marginDescription: string | undefined;
+
+  /**
+   * @param row the thresholds the rule looked up (copied; the caller may reuse it).
+   * @param deltaPhi Δφ (map units) from the point to the nearest boundary point, NaN if none.
+   * @param deltaY Δy (map units), likewise.
+   */
+  constructor(
+    state: PredictedState,
+    nearestBoundary: { readonly id: BoundaryId; readonly label: string },
+    margin: number,
+    cause: StateCause,
+    row: RuleRow,
+    phi: number,
+    parameters: ClassifierParameters,
+    polydispersity: number | null,
+    yLabel: string,
+    deltaPhi: number,
+    deltaY: number,
+  ) {
+    this.state = state;
+    this.nearestBoundary = nearestBoundary;
+    this.margin = margin;
+    this.#cause = cause;
+    Object.assign(this.#row, row);
+    this.#phi = phi;
+    this.#parameters = parameters;
+    this.#polydispersity = polydispersity;
+    this.#yLabel = yLabel;
+    this.#deltaPhi = deltaPhi;
+    this.#deltaY = deltaY;
+  }
+
+  get reason(): string {
+    this.#reason ??= describeCause(this.#cause, this.#row, this.#phi, this.#parameters, this.#polydispersity);
+    return this.#reason;
+  }
+
+  get marginDescription(): string {
+    this.#marginDescription ??= Number.isNaN(this.#deltaPhi)
+      ? 'no state-changing boundary on this map; margin reported as 1 (the whole map)'
+      : `${formatNumber(this.margin, 4)} (normalised map units) to ${this.nearestBoundary.label}: Δφ = ${signed(this.#deltaPhi)}, Δ${this.#yLabel} = ${signed(this.#deltaY)}`;
+    return this.#marginDescription;
+  }
+
+  toJSON(): ClassifiedPoint {
+    return {
+      state: this.state,
+      nearestBoundary: { id: this.nearestBoundary.id, label: this.nearestBoundary.label },
+      margin: this.margin,
+      marginDescription: this.marginDescription,
+      reason: this.reason,
+    };
+  }
+}
+
+function signed(value: number): string {
+  const text = formatNumber(value, 4);
+  return value > 0 ? `+${text}` : text;
+}

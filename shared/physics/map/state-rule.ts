@@ -1,0 +1,168 @@
+import { attractiveGlassLineB2 } from './classifier-parameters';
+import type { ClassifierParameters, ClassifierTables, DomeCurve, LevelCurve, PredictedState } from './types';
+
+// The lookups live here, next to the rule that calls them per point (no cross-module call in
+// the classifier's hot loop).
+
+/**
+ * φ on a level curve at normalised attraction u, by binary search and linear interpolation;
+ * clamped to the end values outside the curve's range. Internal.
+ */
+export function curveAt(curve: LevelCurve, u: number): number {
+  const us = curve.u;
+  const n = us.length;
+  if (n === 0) return NaN;
+  if (u <= us[0]) return curve.phi[0];
+  if (u >= us[n - 1]) return curve.phi[n - 1];
+  let low = 0;
+  let high = n - 1;
+  while (high - low > 1) {
+    const middle = (low + high) >> 1;
+    if (us[middle] <= u) low = middle; else high = middle;
+  }
+  const span = us[high] - us[low];
+  const t = span > 0 ? (u - us[low]) / span : 0;
+  return curve.phi[low] + t * (curve.phi[high] - curve.phi[low]);
+}
+
+/**
+ * Left and right φ of a dome (binodal or spinodal) at u, or `null` below its bottom (the
+ * critical point). Above its last level the top values are kept. Internal.
+ */
+export function domeAt(dome: DomeCurve | null, u: number): [number, number] | null {
+  if (dome === null || u < dome.bottom) return null;
+  return [curveAt(dome.left, u), curveAt(dome.right, u)];
+}
+
+/** Why a state was chosen; classifyPoint turns it into words. */
+export type StateCause =
+  | 'gel-spinodal'
+  | 'gel-binodal'
+  | 'separated'
+  | 'glass-attractive'
+  | 'glass-repulsive'
+  | 'crystal-coexistence'
+  | 'crystal'
+  | 'fluid-suppressed'
+  | 'fluid';
+
+const STATE_OF: Record<StateCause, PredictedState> = {
+  'gel-spinodal': 'gel',
+  'gel-binodal': 'gel',
+  separated: 'separated',
+  'glass-attractive': 'glass',
+  'glass-repulsive': 'glass',
+  'crystal-coexistence': 'crystal',
+  crystal: 'crystal',
+  'fluid-suppressed': 'fluid',
+  fluid: 'fluid',
+};
+
+/** The state of a cause. */
+export function stateOfCause(cause: StateCause): PredictedState {
+  return STATE_OF[cause];
+}
+
+/**
+ * The rule's thresholds at one theory-frame level u₀ (they do not depend on φ): the spinodal and
+ * binodal limits, the fluid side of fluid–crystal coexistence, melting, and the effective B2*.
+ * NaN means absent (or not looked up). Internal.
+ */
+export interface RuleRow {
+  spinodalLow: number;
+  spinodalHigh: number;
+  binodalLow: number;
+  binodalHigh: number;
+  freezing: number;
+  melting: number;
+  b2: number;
+}
+
+export function emptyRow(): RuleRow {
+  return { spinodalLow: NaN, spinodalHigh: NaN, binodalLow: NaN, binodalHigh: NaN, freezing: NaN, melting: NaN, b2: NaN };
+}
+
+/** Fill `row` with every threshold at u₀ (a row of the region grid shares one). Internal. */
+export function ruleRowAt(tables: ClassifierTables, u0: number, b2: number, row: RuleRow = emptyRow()): RuleRow {
+  const spinodal = tables.spinodal;
+  const binodal = tables.binodal;
+  const inSpinodal = spinodal !== null && u0 >= spinodal.bottom;
+  const inBinodal = binodal !== null && u0 >= binodal.bottom;
+  row.spinodalLow = inSpinodal ? curveAt(spinodal.left, u0) : NaN;
+  row.spinodalHigh = inSpinodal ? curveAt(spinodal.right, u0) : NaN;
+  row.binodalLow = inBinodal ? curveAt(binodal.left, u0) : NaN;
+  row.binodalHigh = inBinodal ? curveAt(binodal.right, u0) : NaN;
+  row.freezing = curveAt(tables.freezing, u0);
+  row.melting = curveAt(tables.melting, u0);
+  row.b2 = b2;
+  return row;
+}
+
+/**
+ * Gelwright's state rule (physics.md §5) on a prepared row, at φ (comparisons with NaN are
+ * false, i.e. "absent"):
+ * 1. inside the spinodal and φ < glassPhi → gel (spinodal decomposition arrested);
+ * 2. inside the binodal, φ < glassPhi → gel if B2*_eff ≤ gelB2Threshold, else separated;
+ * 3. B2*_eff at or below the attractive-glass line B2*_AG(φ) → glass (attractive);
+ * 4. φ ≥ glassPhi → glass (repulsive);
+ * 5. φ above the fluid side of fluid–crystal coexistence → crystal (fluid when the crystal is
+ *    suppressed by polydispersity);
+ * 6. otherwise fluid.
+ * Internal.
+ */
+export function causeOnRow(row: RuleRow, parameters: ClassifierParameters, crystalSuppressed: boolean, phi: number): StateCause {
+  const belowGlass = phi < parameters.glassPhi;
+  if (belowGlass && phi > row.spinodalLow && phi < row.spinodalHigh) return 'gel-spinodal';
+  if (belowGlass && phi > row.binodalLow && phi < row.binodalHigh) return row.b2 <= parameters.gelB2Threshold ? 'gel-binodal' : 'separated';
+  if (row.b2 <= attractiveGlassLineB2(phi, parameters)) return 'glass-attractive';
+  if (!belowGlass) return 'glass-repulsive';
+  if (phi > row.freezing) {
+    if (crystalSuppressed) return 'fluid-suppressed';
+    return phi < row.melting ? 'crystal-coexistence' : 'crystal';
+  }
+  return 'fluid';
+}
+
+const scratchRow = emptyRow();
+
+/**
+ * The same rule at one point (φ, u₀, B2*_eff), looking up only as far as it needs: `row`
+ * (reused) receives the thresholds it looked up, the others stay NaN. Same result as
+ * causeOnRow(ruleRowAt(…)) — a test checks it. Internal (classifier, active-segment marking).
+ */
+export function decideCause(
+  tables: ClassifierTables,
+  parameters: ClassifierParameters,
+  crystalSuppressed: boolean,
+  phi: number,
+  u0: number,
+  b2: number,
+  row: RuleRow = scratchRow,
+): StateCause {
+  row.spinodalLow = NaN; row.spinodalHigh = NaN; row.binodalLow = NaN; row.binodalHigh = NaN;
+  row.freezing = NaN; row.melting = NaN; row.b2 = b2;
+  const belowGlass = phi < parameters.glassPhi;
+  if (belowGlass) {
+    const spinodal = tables.spinodal;
+    if (spinodal !== null && u0 >= spinodal.bottom) {
+      row.spinodalLow = curveAt(spinodal.left, u0);
+      row.spinodalHigh = curveAt(spinodal.right, u0);
+      if (phi > row.spinodalLow && phi < row.spinodalHigh) return 'gel-spinodal';
+    }
+    const binodal = tables.binodal;
+    if (binodal !== null && u0 >= binodal.bottom) {
+      row.binodalLow = curveAt(binodal.left, u0);
+      row.binodalHigh = curveAt(binodal.right, u0);
+      if (phi > row.binodalLow && phi < row.binodalHigh) return b2 <= parameters.gelB2Threshold ? 'gel-binodal' : 'separated';
+    }
+  }
+  if (b2 <= parameters.attractiveGlassB2 - parameters.attractiveGlassSlope * (parameters.glassPhi - phi)) return 'glass-attractive';
+  if (!belowGlass) return 'glass-repulsive';
+  row.freezing = curveAt(tables.freezing, u0);
+  if (phi > row.freezing) {
+    if (crystalSuppressed) return 'fluid-suppressed';
+    row.melting = curveAt(tables.melting, u0);
+    return phi < row.melting ? 'crystal-coexistence' : 'crystal';
+  }
+  return 'fluid';
+}

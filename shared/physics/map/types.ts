@@ -1,0 +1,166 @@
+/** The predicted states of a recipe on the map (physics.md §5). */
+export type PredictedState = 'fluid' | 'gel' | 'glass' | 'crystal' | 'separated';
+
+/**
+ * Which map to draw.
+ * - generic: any short-range attraction, placed through its B2* (extended law of corresponding
+ *   states). `theory` picks the fluid–fluid theory (mean-field CS + B2*, or Baxter/Percus–Yevick
+ *   adhesive spheres); `axis` the y axis: B2*, 1/τ, or the depth U/kT of a square well of range
+ *   `lambda` (default 1.5).
+ * - depletion: colloid + ideal polymer in free-volume theory at size ratio q; y is the reservoir
+ *   polymer fraction φ_p^R.
+ */
+export type MapModel =
+  | { kind: 'generic'; theory: 'meanField' | 'baxterPY'; axis: 'b2' | 'inverseTau' | 'squareWellDepth'; lambda?: number }
+  | { kind: 'depletion'; q: number };
+
+/** Any of the supported descriptions of the attraction of a recipe or observation. */
+export type AttractionInput =
+  | { kind: 'b2'; value: number }
+  | { kind: 'tau'; value: number }
+  | { kind: 'squareWell'; depth: number; lambda: number }
+  | { kind: 'depletion'; q: number; polymerReservoir: number };
+
+/** Thresholds of the classification rule; see DEFAULT_CLASSIFIER_PARAMETERS for each meaning. */
+export interface ClassifierParameters {
+  /** Shift of the attraction scale in B2* units: B2*_effective = B2*_computed − attractionShift. */
+  attractionShift: number;
+  /** Inside the binodal (outside the spinodal) a point with B2*_effective ≤ this is a gel. */
+  gelB2Threshold: number;
+  /** Volume fraction of the repulsive glass transition. */
+  glassPhi: number;
+  /** Size polydispersity (%) above which crystallisation is taken as suppressed. */
+  polydispersityCrystalThreshold: number;
+  /** B2*_effective of the approximate attractive-glass line at φ = glassPhi. */
+  attractiveGlassB2: number;
+  /** Slope d(B2*)/dφ of that line: at lower φ the line needs stronger attraction. */
+  attractiveGlassSlope: number;
+}
+
+/** Boundary identifiers; one id may be drawn as several pieces (e.g. stable and metastable). */
+export type BoundaryId =
+  | 'binodal'
+  | 'spinodal'
+  | 'freezing'
+  | 'melting'
+  | 'percolation'
+  | 'repulsive-glass'
+  | 'attractive-glass'
+  | 'gel';
+
+/** A point in map coordinates: [φ, y in the y axis's own unit]. */
+export type MapPoint = [number, number];
+
+export interface MapBoundary {
+  id: BoundaryId;
+  label: string;
+  points: MapPoint[];
+  /** Drawn dashed: the branch lies where another phase is more stable (or, for percolation, inside a two-phase region). */
+  metastable: boolean;
+  /** Drawn as approximate (no reliable published numbers, e.g. the attractive glass). */
+  approximate: boolean;
+}
+
+export interface MapMarker {
+  id: 'critical-point' | 'simulation-critical-point' | 'triple-point';
+  label: string;
+  x: number;
+  y: number;
+}
+
+export interface MapAxis {
+  /** Short symbol for the axis title, e.g. 'B2*'. */
+  label: string;
+  /** Long name, e.g. 'reduced second virial coefficient'. */
+  quantity: string;
+  /** Unit ('' when dimensionless). */
+  unit: string;
+  /** [min, max], ascending. */
+  domain: [number, number];
+  /** True when larger values are drawn lower (B2*: more negative is more attractive, drawn up). */
+  inverted: boolean;
+  /** y value at the bottom of the map (weakest attraction) and at the top (strongest). */
+  weakest: number;
+  strongest: number;
+}
+
+/** Region shading: a coarse grid of state codes over the map (row 0 = weakest attraction). */
+export interface StateRegions {
+  /** Code → name; 'crystal-suppressed' marks the greyed crystal region (classified as fluid). */
+  codes: Array<PredictedState | 'crystal-suppressed'>;
+  labels: Record<PredictedState | 'crystal-suppressed', string>;
+  columns: number;
+  rows: number;
+  /** Cell centres span x: [0, φ_cp] and y: weakest → strongest, uniformly. */
+  cells: number[];
+}
+
+/** A curve of the theory, in normalised coordinates (see buildStateMap docs), for lookups. */
+export interface LevelCurve {
+  /** Normalised attraction u (0 = weakest, 1 = strongest), ascending. */
+  u: number[];
+  phi: number[];
+}
+
+/** A closed-top region (binodal or spinodal): left and right branches from the bottom up. */
+export interface DomeCurve {
+  bottom: number;
+  left: LevelCurve;
+  right: LevelCurve;
+}
+
+/** Everything the fast classifier needs; plain numbers so the map stays JSON-serialisable. */
+export interface ClassifierTables {
+  /** Theory frame (no attraction shift): dome and coexistence curves against u₀. */
+  binodal: DomeCurve | null;
+  spinodal: DomeCurve | null;
+  freezing: LevelCurve;
+  melting: LevelCurve;
+  /** Depletion maps only: B2* at each level (u₀ ascending), for y ↔ B2* conversions. */
+  reducedB2?: { u: number[]; b2: number[] };
+  /** Drawn curves (with the map's shift), in map units, per boundary id, for distances and signs. */
+  curves: Array<{ id: BoundaryId; label: string; shape: 'dome' | 'phiOfY' | 'yOfPhi'; points: MapPoint[] }>;
+  /** For each drawn curve, a 0/1 flag per segment: 1 where the predicted state changes across it. */
+  active: number[][];
+}
+
+export interface StateMap {
+  modelVersion: string;
+  model: MapModel;
+  modelName: string;
+  parameters: ClassifierParameters;
+  /** Size polydispersity (%) the map was built for, or null. */
+  polydispersity: number | null;
+  crystalSuppressed: boolean;
+  levels: number;
+  x: MapAxis;
+  y: MapAxis;
+  boundaries: MapBoundary[];
+  markers: MapMarker[];
+  regions: StateRegions;
+  notes: string[];
+  tables: ClassifierTables;
+}
+
+export interface StateMapOptions {
+  /** Attraction levels computed from bottom to top (default 200, 20–2000). */
+  levels?: number;
+  /** Classifier parameters (any subset; the rest from DEFAULT_CLASSIFIER_PARAMETERS). */
+  parameters?: Partial<ClassifierParameters>;
+  /** Size polydispersity in %; above the threshold the crystal region is greyed. */
+  polydispersity?: number;
+  /** Top of the y axis in its own unit (strongest attraction); default from B2* = −10. */
+  yMax?: number;
+  /** Region grid (default 160 × 100). */
+  gridColumns?: number;
+  gridRows?: number;
+}
+
+export interface ClassifiedPoint {
+  readonly state: PredictedState;
+  readonly nearestBoundary: { readonly id: BoundaryId; readonly label: string };
+  /** Distance to the nearest state-changing boundary, in normalised map units (see classifyPoint). */
+  readonly margin: number;
+  readonly marginDescription: string;
+  readonly reason: string;
+}

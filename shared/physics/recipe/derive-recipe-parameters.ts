@@ -1,0 +1,119 @@
+import { stickinessFromReducedB2 } from '../attraction/stickiness-from-reduced-b2';
+import { brownianTime } from '../colloid/brownian-time';
+import { gravitationalPecletNumber } from '../colloid/gravitational-peclet-number';
+import { ZERO_CELSIUS } from '../colloid/physical-constants';
+import { stokesEinsteinDiffusion } from '../colloid/stokes-einstein-diffusion';
+import { stokesSettlingSpeed } from '../colloid/stokes-settling-speed';
+import { volumeFractionFromMassFraction } from '../colloid/volume-fraction-from-mass-fraction';
+import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
+import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
+import { attractionToMapY } from '../map/attraction-to-map-y';
+import { buildStateMap } from '../map/build-state-map';
+import { classifyPoint } from '../map/classify-point';
+import { PHYSICS_MODEL_VERSION } from '../map/model-version';
+import type { StateMap } from '../map/types';
+import { PhysicsArgumentError } from '../validation/physics-argument-error';
+import { requireInRange } from '../validation/require-in-range';
+import { requirePositive } from '../validation/require-positive';
+import { requireVolumeFraction } from '../validation/require-volume-fraction';
+import { recipeAttraction } from './recipe-attraction';
+import type { RecipeDerivation, RecipeInput } from './recipe-types';
+
+export { DEFAULT_CLOSEST_APPROACH_NM } from './recipe-attraction';
+export type { RecipeDerivation, RecipeInput } from './recipe-types';
+
+/**
+ * Every derived parameter a recipe stores, from its materials and composition: φ (from the mass
+ * fraction if given), the attraction (contact U/kT, range in σ, B2*, τ; depletion: q, R_g, c*,
+ * φ_p = c/c*, φ_p^R = φ_p/α(φ); salt: Debye length and DLVO with closest approach h_min),
+ * transport (Stokes–Einstein D, Brownian time a²/D, gravitational Péclet number, Stokes
+ * settling speed), the map model to use (free-volume depletion map for depletant recipes, the
+ * generic map otherwise: B2* axis for salt or none, U/kT at λ = 1 + range for direct input), the
+ * predicted state with its nearest boundary and margin, the model version and warnings.
+ *
+ * Sources: see each function (physics.md §2, §4, §6). The polymer's own volume is neglected in
+ * the concentration conversion; a 'solvent' concentration basis is scaled by (1 − φ).
+ *
+ * @param input the recipe (see RecipeInput for units).
+ * @param options.map a prebuilt map to classify against, used when its model equals the one the
+ *   recipe needs (otherwise a map is built: ~10–40 ms).
+ * @throws PhysicsArgumentError naming the field for missing or out-of-range input (e.g.
+ *   `particle.radiusNm must be a radius in nm in (0, Infinity); got 0`).
+ * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGPerCm3: 1.05 }, solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 }, temperatureC: 25, particleVolumeFraction: 0.2 }).diffusionM2PerS // 2.4537e-12
+ */
+export function deriveRecipeParameters(input: RecipeInput, options: { map?: StateMap } = {}): RecipeDerivation {
+  if (input === null || typeof input !== 'object') throw new PhysicsArgumentError('input', 'a recipe object', input);
+  if (!input.particle || !input.solvent) throw new PhysicsArgumentError(input.particle ? 'solvent' : 'particle', 'an object with the material properties', undefined);
+  const radiusNm = requirePositive('particle.radiusNm', input.particle.radiusNm, 'a radius in nm');
+  const particleDensity = requirePositive('particle.densityGPerCm3', input.particle.densityGPerCm3, 'a density in g/cm³');
+  const viscosity = requirePositive('solvent.viscosityMPaS', input.solvent.viscosityMPaS, 'a viscosity in mPa·s') * 1e-3;
+  const solventDensity = requirePositive('solvent.densityGPerCm3', input.solvent.densityGPerCm3, 'a density in g/cm³');
+  const temperature = requireInRange('temperatureC', input.temperatureC, -30, 200, { what: 'a temperature in °C', lowEnd: 'closed', highEnd: 'closed' }) + ZERO_CELSIUS;
+  const polydispersity = input.particle.polydispersityPercent === undefined
+    ? undefined
+    : requireInRange('particle.polydispersityPercent', input.particle.polydispersityPercent, 0, 100, { what: 'a polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
+  const phi = volumeFraction(input, particleDensity, solventDensity);
+  const warnings: string[] = [];
+
+  const radius = radiusNm * 1e-9;
+  const densityDifference = (particleDensity - solventDensity) * 1000;
+  const diffusion = stokesEinsteinDiffusion(temperature, viscosity, radius);
+
+  const attraction = recipeAttraction(input, phi, temperature);
+  warnings.push(...attraction.warnings);
+  const b2 = attraction.b2;
+  const tau = b2 !== null && b2 < 1 ? stickinessFromReducedB2(b2) : null;
+  if ((input.theory ?? 'meanField') === 'baxterPY' && tau !== null && baxterLambdaUnchecked(phi, tau) === null) {
+    warnings.push('Percus–Yevick has no real root at this φ and τ (inside its no-solution band): reported as no solution; the map keeps the nearest computed boundaries.');
+  }
+
+  const sameModel = options.map && JSON.stringify(options.map.model) === JSON.stringify({ ...attraction.mapModel, ...(attraction.mapModel.kind === 'generic' ? { lambda: attraction.mapModel.lambda ?? 1.5 } : {}) });
+  const map = sameModel ? options.map! : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
+  if (map.crystalSuppressed) warnings.push(`Polydispersity ${polydispersity} % above ${map.parameters.polydispersityCrystalThreshold} %: crystallisation taken as suppressed.`);
+  const mapY = attractionToMapY(map, attraction.attraction);
+  const uOnMap = (mapY - map.y.weakest) / (map.y.strongest - map.y.weakest);
+  if (uOnMap > 1) warnings.push('The attraction lies beyond the top of the map; the prediction extrapolates its strongest boundaries.');
+  const classification = classifyPoint(map, { phi, attraction: attraction.attraction }, sameModel ? input.parameters : undefined).toJSON();
+
+  return {
+    modelVersion: PHYSICS_MODEL_VERSION,
+    attractionSource: attraction.source,
+    phi,
+    q: attraction.q,
+    radiusOfGyrationNm: attraction.radiusOfGyrationNm,
+    overlapConcentrationGPerL: attraction.overlapConcentrationGPerL,
+    systemPolymerFraction: attraction.systemPolymerFraction,
+    reservoirPolymerFraction: attraction.reservoirPolymerFraction,
+    contactEnergyKT: attraction.contactEnergyKT,
+    rangeSigma: attraction.rangeSigma,
+    b2,
+    tau,
+    debyeLengthNm: attraction.debyeLengthNm,
+    closestApproachNm: attraction.closestApproachNm,
+    barrierKT: attraction.barrierKT,
+    diffusionM2PerS: diffusion,
+    brownianTimeS: brownianTime(radius, diffusion),
+    gravitationalPeclet: gravitationalPecletNumber(radius, densityDifference, temperature),
+    settlingSpeedMPerS: stokesSettlingSpeed(radius, densityDifference, viscosity),
+    mapModel: map.model,
+    mapY,
+    predictedState: classification.state,
+    nearestBoundary: { ...classification.nearestBoundary },
+    margin: classification.margin,
+    marginDescription: classification.marginDescription,
+    reason: classification.reason,
+    warnings,
+  };
+}
+
+function volumeFraction(input: RecipeInput, particleDensity: number, solventDensity: number): number {
+  const hasMass = input.particleMassFraction !== undefined;
+  const hasVolume = input.particleVolumeFraction !== undefined;
+  if (hasMass === hasVolume) {
+    throw new PhysicsArgumentError('particleMassFraction', 'given, or else particleVolumeFraction (exactly one of the two)', hasMass ? 'both given' : 'neither given');
+  }
+  const phi = hasMass
+    ? volumeFractionFromMassFraction(input.particleMassFraction as number, particleDensity, solventDensity)
+    : (input.particleVolumeFraction as number);
+  return requireVolumeFraction(hasMass ? 'particleMassFraction (as φ)' : 'particleVolumeFraction', phi, FCC_CLOSE_PACKING);
+}
