@@ -7,7 +7,8 @@ import { requireReservoirPolymer, requireSizeRatio } from './free-volume-limits'
  * Gas–liquid binodal of colloid + ideal polymer in free-volume theory at (q, φ_p^R): equal p̃
  * and βμ of the fluid branch below and above the spinodal (Brent in βμ, Newton polish; the
  * residuals |Δp̃|, |Δβμ| are below 1e-12). Returned whether or not it is stable against the
- * crystal: below q ≈ 0.33 it is metastable (inside fluid–crystal coexistence) and is drawn dashed.
+ * crystal: below q ≈ 0.33 it is metastable (inside fluid–crystal coexistence) and is drawn dashed;
+ * at small q its liquid can even lie above φ_cp (searched up to φ = 0.99), as the theory says.
  *
  * Source: Lekkerkerker et al., Europhys. Lett. 20, 559 (1992).
  *

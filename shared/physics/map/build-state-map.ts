@@ -3,7 +3,7 @@ import { freeVolumeCriticalEndpoint } from '../depletion/free-volume-critical-en
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireInRange } from '../validation/require-in-range';
-import { buildAxis } from './build-axis';
+import { buildAxis, depletionPolymerForB2, genericB2FromY, genericYFromB2 } from './build-axis';
 import { resolveClassifierParameters } from './classifier-parameters';
 import { curveAt, domeAt } from './state-rule';
 import { buildDrawnCurves, type DrawnCurve } from './drawn-curves';
@@ -18,6 +18,7 @@ import { traceTheoryCurves, type TheoryCurves } from './theory-curves';
 import type {
   ClassifierParameters,
   ClassifierTables,
+  MapAxis,
   MapBoundary,
   MapMarker,
   MapModel,
@@ -90,12 +91,20 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
   const crystalSuppressed = polydispersity !== null && polydispersity > parameters.polydispersityCrystalThreshold;
 
   const axis = buildAxis(resolved, options.yMax);
-  const levelsU = Array.from({ length: levels }, (_, i) => i / (levels - 1));
-  const table: ReducedB2Table | undefined = resolved.kind === 'depletion'
-    ? { u: levelsU, b2: levelsU.map((u) => asakuraOosawaReducedB2(resolved.q, axis.weakest + u * (axis.strongest - axis.weakest))) }
-    : undefined;
+  const shift = parameters.attractionShift;
+  // Theory levels cover the drawn y range seen through the shift: a boundary at B2* is drawn at
+  // B2* + shift, so the drawn range [weakest, strongest] needs theory B2* from 1 − shift down to
+  // B2*(strongest) − shift.
+  const span = theoryLevelSpan(resolved, axis, shift);
+  const levelsU = Array.from({ length: levels }, (_, i) => span.start + ((span.end - span.start) * i) / (levels - 1));
+  let table: ReducedB2Table | undefined;
+  if (resolved.kind === 'depletion') {
+    const top = Math.max(1, span.end);
+    const u = Array.from({ length: levels }, (_, i) => (top * i) / (levels - 1));
+    table = { u, b2: u.map((value) => asakuraOosawaReducedB2(resolved.q, axis.weakest + value * (axis.strongest - axis.weakest))) };
+  }
   const theory = createMapFrame(resolved, axis, 0, table);
-  const drawn = createMapFrame(resolved, axis, parameters.attractionShift, table);
+  const drawn = createMapFrame(resolved, axis, shift, table);
   const physics = resolved.kind === 'generic' ? genericLevelPhysics(resolved.theory, theory) : depletionLevelPhysics(resolved.q, theory);
   const traced = traceTheoryCurves(physics, levelsU);
 
@@ -122,6 +131,19 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
     notes: buildNotes(resolved, traced, theory, parameters, polydispersity, crystalSuppressed),
     tables,
   };
+}
+
+/** Normalised theory-frame levels [start, end] the map must compute for a given shift. */
+function theoryLevelSpan(model: MapModel, axis: MapAxis, shift: number): { start: number; end: number } {
+  if (shift === 0) return { start: 0, end: 1 };
+  const uOf = (y: number) => (y - axis.weakest) / (axis.strongest - axis.weakest);
+  if (model.kind === 'generic') {
+    const strongestB2 = genericB2FromY(model, axis.strongest);
+    return { start: uOf(genericYFromB2(model, 1 - shift)), end: uOf(genericYFromB2(model, strongestB2 - shift)) };
+  }
+  const strongestB2 = asakuraOosawaReducedB2(model.q, axis.strongest);
+  const start = 1 - shift >= 1 ? 0 : uOf(depletionPolymerForB2(model.q, 1 - shift));
+  return { start, end: uOf(depletionPolymerForB2(model.q, strongestB2 - shift)) };
 }
 
 function requireInteger(argument: string, value: number, low: number, high: number): number {

@@ -57,7 +57,11 @@ export function genericLevelPhysics(theory: 'meanField' | 'baxterPY', frame: Map
     };
   }
   const baxter = baxterPYCriticalPoint();
-  const tauAt = (u: number) => 1 / (4 * (1 - b2At(u)));
+  // B2* ≥ 1 (possible under a negative attraction shift) has no adhesive-sphere equivalent.
+  const tauAt = (u: number) => {
+    const b2 = b2At(u);
+    return b2 < 1 ? 1 / (4 * (1 - b2)) : Infinity;
+  };
   const band = memoizeLast((u: number) => baxterBandUnchecked(tauAt(u)));
   return {
     critical: { phi: baxter.phi, u: frame.uFromY(frame.yFromB2(1 - 1 / (4 * baxter.tau))) },

@@ -7,7 +7,7 @@
  * tolerance 1e-10; below √ε the parabola is swamped by rounding).
  *
  * @returns `{ x, value }` at the minimum.
- * @example brentMinimize((x) => (x - 2) ** 2 + 1, 0, 5).x // 2 (to ~1e-10)
+ * @example brentMinimize((x) => (x - 2) ** 2 + 1, 0, 5).x // 2.00000001 (a flat minimum: to ~1e-8)
  */
 export function brentMinimize(f: (x: number) => number, low: number, high: number, tolerance = 1e-10): { x: number; value: number } {
   const golden = 0.3819660112501051;

@@ -1,0 +1,115 @@
+import { describe, expect, it } from 'vitest';
+import { asakuraOosawaReducedB2 } from '../attraction/asakura-oosawa-reduced-b2';
+import { freeVolumeFraction } from '../depletion/free-volume-fraction';
+import { allNumbers } from '../test-support/map-builders';
+import { expectArgumentError, expectRelative } from '../test-support/expect-relative';
+import { deriveRecipeParameters } from './derive-recipe-parameters';
+import type { RecipeInput } from './recipe-types';
+
+/** A 100 nm polystyrene-like particle in water at 25 °C (IAPWS viscosity 0.89002 mPa·s). */
+function buildRecipe(overrides: Partial<RecipeInput> = {}): RecipeInput {
+  return {
+    particle: { radiusNm: 100, densityGPerCm3: 1.05, polydispersityPercent: 5, surfacePotentialMv: -25, hamakerJ: 1e-20 },
+    solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 },
+    temperatureC: 25,
+    particleVolumeFraction: 0.2,
+    ...overrides,
+  };
+}
+
+describe('deriveRecipeParameters', () => {
+  it('derives the depletion parameters from PEG concentration: q, c*, φ_p, φ_p^R, U/kT, B2*, τ', () => {
+    const derived = deriveRecipeParameters(buildRecipe({
+      depletant: { molarMassKgPerMol: 20, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGPerL: 3 },
+    }));
+    // R_g = 6.9173 nm (physics.md §6, Devanand & Selser fit from memory), c* = 23.9538 g/L (derived).
+    expectRelative(derived.radiusOfGyrationNm!, 6.91733720962861, 1e-12);
+    expectRelative(derived.overlapConcentrationGPerL!, 23.9537571264255, 1e-12);
+    expectRelative(derived.q!, 0.0691733720962861, 1e-12);
+    expectRelative(derived.systemPolymerFraction!, 3 / 23.9537571264255, 1e-12);
+    expectRelative(derived.reservoirPolymerFraction!, derived.systemPolymerFraction! / freeVolumeFraction(0.2, derived.q!), 1e-13);
+    expectRelative(derived.contactEnergyKT!, derived.reservoirPolymerFraction! * (1 + 3 / (2 * derived.q!)), 1e-13);
+    expectRelative(derived.b2!, asakuraOosawaReducedB2(derived.q!, derived.reservoirPolymerFraction!), 1e-13);
+    expectRelative(derived.tau!, 1 / (4 * (1 - derived.b2!)), 1e-13);
+    expect(derived.rangeSigma).toBe(derived.q);
+    expect(derived.mapModel).toEqual({ kind: 'depletion', q: derived.q });
+    expect(derived.mapY).toBe(derived.reservoirPolymerFraction);
+    expect(derived.attractionSource).toBe('depletion');
+  });
+
+  it('scales a per-solvent concentration by (1 − φ)', () => {
+    const sample = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, radiusOfGyrationNm: 7, concentrationGPerL: 4 } }));
+    const solvent = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, radiusOfGyrationNm: 7, concentrationGPerL: 4, concentrationBasis: 'solvent' } }));
+    expectRelative(solvent.systemPolymerFraction!, sample.systemPolymerFraction! * 0.8, 1e-13);
+  });
+
+  it('derives transport: Stokes–Einstein D, Brownian time, Péclet number and settling speed', () => {
+    const derived = deriveRecipeParameters(buildRecipe());
+    // physics.md §6: D = 2.4537e-12 m²/s for a = 100 nm in water at 25 °C (derived).
+    expectRelative(derived.diffusionM2PerS, 2.45367595665898e-12, 1e-12);
+    expectRelative(derived.brownianTimeS, (100e-9) ** 2 / derived.diffusionM2PerS, 1e-13);
+    expectRelative(derived.gravitationalPeclet, ((4 * Math.PI) / 3) * (100e-9) ** 4 * 53 * 9.80665 / (1.380649e-23 * 298.15), 1e-10);
+    expectRelative(derived.settlingSpeedMPerS, (2 * (100e-9) ** 2 * 53 * 9.80665) / (9 * 0.89002e-3), 1e-10);
+  });
+
+  it('uses DLVO for salt with the closest approach stated, and reports the Debye length', () => {
+    const derived = deriveRecipeParameters(buildRecipe({ salt: { concentrationMM: 100, valence: 1 } }));
+    expect(derived.attractionSource).toBe('salt');
+    expectRelative(derived.debyeLengthNm!, 0.304011912660618 / Math.sqrt(0.1), 1e-12);
+    expect(derived.closestApproachNm).toBe(0.4);
+    expect(derived.warnings.some((warning) => warning.includes('0.4 nm'))).toBe(true);
+    // Derived with mpmath (reference/derive-check-values.py, dlvo_check): contact −14.9767 kT.
+    expectRelative(derived.contactEnergyKT!, 14.97668191652228, 1e-12);
+    expect(derived.mapModel).toMatchObject({ kind: 'generic', axis: 'b2' });
+    expect(derived.b2!).toBeLessThan(-100);
+  });
+
+  it('places a direct U/kT and range on the square-well map of that range', () => {
+    const derived = deriveRecipeParameters(buildRecipe({ direct: { contactEnergyKT: 3, range: 0.1 } }));
+    expect(derived.mapModel).toEqual({ kind: 'generic', theory: 'meanField', axis: 'squareWellDepth', lambda: 1.1 });
+    expect(derived.mapY).toBeCloseTo(3, 12);
+    expectRelative(derived.b2!, 1 - (1.1 ** 3 - 1) * Math.expm1(3), 1e-13);
+  });
+
+  it('converts a mass fraction to φ and treats a recipe without attraction as hard spheres', () => {
+    const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: undefined, particleMassFraction: 0.3 }));
+    expectRelative(derived.phi, (0.3 / 1.05) / (0.3 / 1.05 + 0.7 / 0.997), 1e-14);
+    expect(derived.b2).toBe(1);
+    expect(derived.tau).toBeNull();
+    expect(derived.predictedState).toBe('fluid');
+    expect(derived.warnings.some((warning) => warning.includes('hard spheres'))).toBe(true);
+  });
+
+  it('reports no real root of the Percus–Yevick quadratic as a warning, never as NaN', () => {
+    const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.1, theory: 'baxterPY', direct: { contactEnergyKT: 2.3, range: 0.1 } }));
+    expect(derived.tau!).toBeLessThan(0.097);
+    expect(derived.warnings.some((warning) => warning.includes('no real root'))).toBe(true);
+    expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
+  });
+
+  it('returns only finite numbers and the model version for every kind of recipe', () => {
+    const recipes = [
+      buildRecipe(),
+      buildRecipe({ salt: { concentrationMM: 10, valence: 2 } }),
+      buildRecipe({ depletant: { molarMassKgPerMol: 100, radiusOfGyrationNm: 15, concentrationGPerL: 8 } }),
+      buildRecipe({ direct: { contactEnergyKT: 6, range: 0.05 } }),
+    ];
+    for (const recipe of recipes) {
+      const derived = deriveRecipeParameters(recipe);
+      expect(derived.modelVersion).toBe('gw-physics-1');
+      expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
+      expect(['fluid', 'gel', 'glass', 'crystal', 'separated']).toContain(derived.predictedState);
+      expect(derived.reason.length).toBeGreaterThan(10);
+    }
+  });
+
+  it('rejects missing or out-of-range input, naming the field', () => {
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 0, densityGPerCm3: 1 } })), 'particle.radiusNm');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleMassFraction: 0.2 })), 'particleMassFraction');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.9 })), 'particleVolumeFraction');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ temperatureC: Number.NaN })), 'temperatureC');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, concentrationGPerL: 3 } })), 'depletant.radiusOfGyrationNm');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 100, densityGPerCm3: 1.05 }, salt: { concentrationMM: 50, valence: 1 } })), 'particle.surfacePotentialMv');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ direct: { contactEnergyKT: -1, range: 0.1 } })), 'direct.contactEnergyKT');
+  });
+});
