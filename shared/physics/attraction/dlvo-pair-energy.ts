@@ -43,7 +43,7 @@ function checkSystem(system: DlvoSystem): void {
  * @param separation h in m, > 0 (van der Waals diverges at contact).
  * @param system radius, Hamaker constant, surface potential, κ, ε_r, temperature (all checked).
  * @throws PhysicsArgumentError for any argument out of range, NaN or ±Infinity.
- * @example dlvoPairEnergy(1e-9, { radius: 100e-9, hamaker: 1e-20, surfacePotential: 0, inverseDebyeLength: 1e9, relativePermittivity: 78.4, temperature: 298.15 }) // about −19.4
+ * @example dlvoPairEnergy(1e-9, { radius: 100e-9, hamaker: 1e-20, surfacePotential: 0, inverseDebyeLength: 1e9, relativePermittivity: 78.4, temperature: 298.15 }) // -18.5266 (kT)
  */
 export function dlvoPairEnergy(separation: number, system: DlvoSystem): number {
   requirePositive('separation', separation, 'a surface separation in m');
@@ -81,7 +81,7 @@ export interface DlvoSummary {
  * @param system the DLVO system (checked).
  * @param closestApproach h_min in m, 0 < h_min < a.
  * @throws PhysicsArgumentError for arguments out of range.
- * @example dlvoReducedB2(system, 0.4e-9).contactEnergy // βU at 0.4 nm
+ * @example dlvoReducedB2({ radius: 100e-9, hamaker: 1e-20, surfacePotential: -0.025, inverseDebyeLength: 1 / 0.96137e-9, relativePermittivity: 78.4, temperature: 298.15 }, 0.4e-9).contactEnergy // -14.9767
  */
 export function dlvoReducedB2(system: DlvoSystem, closestApproach: number): DlvoSummary {
   checkSystem(system);

@@ -15,7 +15,7 @@ import { VACUUM_PERMITTIVITY } from '../colloid/physical-constants';
  * @param inverseDebyeLength κ in 1/m, > 0.
  * @param relativePermittivity ε_r > 0.
  * @throws PhysicsArgumentError for arguments outside those ranges, NaN or ±Infinity.
- * @example doubleLayerEnergy(1e-9, 100e-9, 0.025, 1e9, 78.4) // 7.41e-20 J
+ * @example doubleLayerEnergy(1e-9, 100e-9, 0.025, 1e9, 78.4) // 8.5395e-20 J
  */
 export function doubleLayerEnergy(separation: number, radius: number, surfacePotential: number, inverseDebyeLength: number, relativePermittivity: number): number {
   requireInRange('separation', separation, 0, Infinity, { what: 'a surface separation in m', lowEnd: 'closed' });

@@ -12,7 +12,7 @@ import { requirePositive } from '../validation/require-positive';
  * @param radius sphere radius a in m, > 0.
  * @param hamaker Hamaker constant A_H in J, > 0.
  * @throws PhysicsArgumentError for non-positive, NaN or infinite arguments.
- * @example hamakerSphereEnergy(1e-9, 100e-9, 1e-20) // -8.0e-20 J (≈ −A_H a/(12h) = −8.3e-20)
+ * @example hamakerSphereEnergy(1e-9, 100e-9, 1e-20) // -7.6263e-20 J (−A_H a/(12h) = −8.33e-20 is the h ≪ a limit)
  */
 export function hamakerSphereEnergy(separation: number, radius: number, hamaker: number): number {
   requirePositive('separation', separation, 'a surface separation in m');

@@ -15,7 +15,7 @@ import { requireTemperature } from './require-temperature';
  * @param temperature absolute temperature in K.
  * @param gravity acceleration in m/s² (default standard gravity 9.80665).
  * @throws PhysicsArgumentError for arguments outside those ranges, NaN or ±Infinity.
- * @example gravitationalPecletNumber(1e-6, 1000, 298.15) // 9.9785
+ * @example gravitationalPecletNumber(1e-6, 1000, 298.15) // 9.9791
  */
 export function gravitationalPecletNumber(radius: number, densityDifference: number, temperature: number, gravity = STANDARD_GRAVITY): number {
   requirePositive('radius', radius, 'a radius in m');

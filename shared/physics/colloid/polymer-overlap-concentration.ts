@@ -11,7 +11,7 @@ import { AVOGADRO_CONSTANT } from './physical-constants';
  * @param molarMass M in g/mol, > 0.
  * @param radiusOfGyration R_g in nm, > 0.
  * @throws PhysicsArgumentError for non-positive, NaN or infinite arguments.
- * @example polymerOverlapConcentration(20000, 6.9173) // 23.970 g/L
+ * @example polymerOverlapConcentration(20000, 6.9173) // 23.954 g/L
  */
 export function polymerOverlapConcentration(molarMass: number, radiusOfGyration: number): number {
   requirePositive('molarMass', molarMass, 'a molar mass in g/mol');

@@ -12,7 +12,7 @@ import { STANDARD_GRAVITY } from './physical-constants';
  * @param viscosity solvent viscosity η in Pa·s, > 0.
  * @param gravity acceleration in m/s² (default 9.80665).
  * @throws PhysicsArgumentError for arguments outside those ranges, NaN or ±Infinity.
- * @example stokesSettlingSpeed(1e-6, 1000, 1e-3) // 2.17925e-6 m/s
+ * @example stokesSettlingSpeed(1e-6, 1000, 1e-3) // 2.17926e-6 m/s
  */
 export function stokesSettlingSpeed(radius: number, densityDifference: number, viscosity: number, gravity = STANDARD_GRAVITY): number {
   requirePositive('radius', radius, 'a radius in m');

@@ -28,10 +28,14 @@ export interface FreeVolumeCriticalPoint {
  */
 export function freeVolumeCriticalPoint(q: number): FreeVolumeCriticalPoint {
   requireSizeRatio(q);
-  return freeVolumeCriticalPointUnchecked(q);
+  const { phi, polymerReservoir, stable } = freeVolumeCriticalPointUnchecked(q);
+  return { phi, polymerReservoir, stable };
 }
 
-/** Critical point without argument checks (internal). */
+/**
+ * Critical point without argument checks, with the crystal-minus-fluid pressure at the critical
+ * μ (−Infinity when no crystal exists at that μ) for the critical-endpoint search. Internal.
+ */
 export function freeVolumeCriticalPointUnchecked(q: number): FreeVolumeCriticalPoint & { stabilityMargin: number } {
   const minimum = brentMinimize((phi) => freeVolumeSpinodalPolymer(phi, q), 1e-4, FLUID_BRANCH_LIMIT, 1e-11);
   const phi = minimum.x;

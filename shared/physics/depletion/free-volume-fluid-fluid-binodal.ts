@@ -16,7 +16,7 @@ import { requireReservoirPolymer, requireSizeRatio } from './free-volume-limits'
  * @param polymerReservoir reservoir polymer fraction, 0 ≤ φ_p^R ≤ 20.
  * @returns `{ gas, liquid }`, or `null` at or below the critical polymer fraction.
  * @throws PhysicsArgumentError for arguments outside those ranges, NaN or ±Infinity.
- * @example freeVolumeFluidFluidBinodal(0.5, 1.0) // { gas: 0.0..., liquid: 0.4... } (see tests)
+ * @example freeVolumeFluidFluidBinodal(0.5, 1.0) // { gas: 0.000401693, liquid: 0.514167 }
  */
 export function freeVolumeFluidFluidBinodal(q: number, polymerReservoir: number): { gas: number; liquid: number } | null {
   requireSizeRatio(q);

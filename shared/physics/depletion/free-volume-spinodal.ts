@@ -11,7 +11,7 @@ import { freeVolumeFluidPieces } from './free-volume-fluid-pieces';
  * @param polymerReservoir reservoir polymer fraction, 0 ≤ φ_p^R ≤ 20.
  * @returns `{ low, high }`, or `null` at or below the critical polymer fraction.
  * @throws PhysicsArgumentError for arguments outside those ranges, NaN or ±Infinity.
- * @example freeVolumeSpinodal(0.5, 1.0) // { low: 0.04..., high: 0.4... } (see tests)
+ * @example freeVolumeSpinodal(0.5, 1.0) // { low: 0.0555679, high: 0.4160791 }
  */
 export function freeVolumeSpinodal(q: number, polymerReservoir: number): { low: number; high: number } | null {
   requireSizeRatio(q);

@@ -24,7 +24,7 @@ export interface FreeVolumeTriplePoint {
  * @returns the triple point, or `null` when the gas–liquid critical point is metastable
  *   (q below the critical endpoint 0.3275): there is then no triple point.
  * @throws PhysicsArgumentError for q outside (0, 5], NaN or ±Infinity.
- * @example freeVolumeTriplePoint(0.6)?.polymerReservoir // ≈ 1.1 (see tests)
+ * @example freeVolumeTriplePoint(0.6)?.polymerReservoir // 1.33556
  */
 export function freeVolumeTriplePoint(q: number): FreeVolumeTriplePoint | null {
   requireSizeRatio(q);

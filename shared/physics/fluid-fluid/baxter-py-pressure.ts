@@ -15,7 +15,7 @@ import { baxterLambdaUnchecked } from './baxter-py-lambda';
  * @param tau stickiness τ > 0.
  * @returns p̃, or `null` inside the no-solution band (no real λ).
  * @throws PhysicsArgumentError for φ outside (0, φ_cp), τ ≤ 0, NaN or ±Infinity.
- * @example baxterPYPressure(0.3, 0.5) // 0.6306... (φZ)
+ * @example baxterPYPressure(0.3, 0.5) // 0.6547872569531 (φZ)
  */
 export function baxterPYPressure(phi: number, tau: number): number | null {
   requireVolumeFraction('phi', phi);

@@ -18,7 +18,7 @@ export const CELL_MODEL_FREE_ENERGY_CONSTANT = 2.1306;
  * Internal: callers have validated 0 < φ < φ_cp. Returns the four quantities at once because the
  * coexistence solvers need them together.
  *
- * @example cellModelSolid(0.6).compressibility // 15.894...
+ * @example cellModelSolid(0.6).compressibility // 15.8131671802...
  */
 export function cellModelSolid(phi: number): { freeEnergy: number; compressibility: number; chemicalPotential: number; pressureDerivative: number } {
   const packing = 1 - phi / FCC_CLOSE_PACKING;

@@ -1,6 +1,6 @@
 import { describeCause } from './describe-cause';
 import { formatNumber } from './format-number';
-import { emptyRow, type RuleRow, type StateCause } from './state-rule';
+import type { RuleRow, StateCause } from './state-rule';
 import type { BoundaryId, ClassifiedPoint, ClassifierParameters, PredictedState } from './types';
 
 /**
@@ -15,7 +15,14 @@ export class PointClassification implements ClassifiedPoint {
   readonly nearestBoundary: { readonly id: BoundaryId; readonly label: string };
   readonly margin: number;
   readonly #cause: StateCause;
-  readonly #row: RuleRow = emptyRow();
+  // The rule's thresholds that were looked up (NaN for the others), copied from the caller's row.
+  readonly #spinodalLow: number;
+  readonly #spinodalHigh: number;
+  readonly #binodalLow: number;
+  readonly #binodalHigh: number;
+  readonly #freezing: number;
+  readonly #melting: number;
+  readonly #b2: number;
   readonly #phi: number;
   readonly #parameters: ClassifierParameters;
   readonly #polydispersity: number | null;
@@ -47,7 +54,13 @@ export class PointClassification implements ClassifiedPoint {
     this.nearestBoundary = nearestBoundary;
     this.margin = margin;
     this.#cause = cause;
-    Object.assign(this.#row, row);
+    this.#spinodalLow = row.spinodalLow;
+    this.#spinodalHigh = row.spinodalHigh;
+    this.#binodalLow = row.binodalLow;
+    this.#binodalHigh = row.binodalHigh;
+    this.#freezing = row.freezing;
+    this.#melting = row.melting;
+    this.#b2 = row.b2;
     this.#phi = phi;
     this.#parameters = parameters;
     this.#polydispersity = polydispersity;
@@ -57,7 +70,15 @@ export class PointClassification implements ClassifiedPoint {
   }
 
   get reason(): string {
-    this.#reason ??= describeCause(this.#cause, this.#row, this.#phi, this.#parameters, this.#polydispersity);
+    this.#reason ??= describeCause(this.#cause, {
+      spinodalLow: this.#spinodalLow,
+      spinodalHigh: this.#spinodalHigh,
+      binodalLow: this.#binodalLow,
+      binodalHigh: this.#binodalHigh,
+      freezing: this.#freezing,
+      melting: this.#melting,
+      b2: this.#b2,
+    }, this.#phi, this.#parameters, this.#polydispersity);
     return this.#reason;
   }
 
