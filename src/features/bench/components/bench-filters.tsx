@@ -1,3 +1,4 @@
+import { useEffect, useRef, useState } from 'react';
 import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES, STATE_LABELS } from '@shared/states';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
@@ -34,10 +35,10 @@ export function BenchFilters({ values, onChange, onClear }: { values: BenchFilte
         )}
       </Field>
       <Field label="Age from (days)" className="w-32">
-        {(props) => <TextInput {...props} type="number" min={0} step="any" value={values.minAge} onChange={(event) => onChange({ minAge: event.target.value })} />}
+        {(props) => <AgeInput {...props} value={values.minAge} onValue={(minAge) => onChange({ minAge })} />}
       </Field>
       <Field label="Age up to (days)" className="w-32">
-        {(props) => <TextInput {...props} type="number" min={0} step="any" value={values.maxAge} onChange={(event) => onChange({ maxAge: event.target.value })} />}
+        {(props) => <AgeInput {...props} value={values.maxAge} onValue={(maxAge) => onChange({ maxAge })} />}
       </Field>
       <label className="inline-flex items-center gap-2 pb-2 text-sm">
         <input type="checkbox" className="h-4 w-4 accent-fjord-500" checked={values.disagreeing} onChange={(event) => onChange({ disagreeing: event.target.checked })} />
@@ -49,5 +50,35 @@ export function BenchFilters({ values, onChange, onClear }: { values: BenchFilte
         </Button>
       )}
     </fieldset>
+  );
+}
+
+/**
+ * A number box whose text lives here while it has focus. The URL it writes to updates inside a
+ * router transition, a moment later; reading the box back from the URL while typing would drop keys.
+ */
+function AgeInput({ value, onValue, ...props }: { value: string; onValue: (text: string) => void; id: string; 'aria-invalid': boolean; 'aria-describedby'?: string }) {
+  const [text, setText] = useState(value);
+  const focused = useRef(false);
+  useEffect(() => {
+    if (!focused.current) setText(value);
+  }, [value]);
+  return (
+    <TextInput
+      {...props}
+      type="number"
+      min={0}
+      step="any"
+      value={text}
+      onFocus={() => (focused.current = true)}
+      onBlur={() => {
+        focused.current = false;
+        setText(value);
+      }}
+      onChange={(event) => {
+        setText(event.target.value);
+        onValue(event.target.value);
+      }}
+    />
   );
 }
