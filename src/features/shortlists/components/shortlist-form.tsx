@@ -110,7 +110,7 @@ export function ShortlistForm({
                         {recipe?.derived.predictedState && <span className="text-ink-soft"> · predicted {STATE_LABELS[recipe.derived.predictedState].toLowerCase()}</span>}
                       </p>
                       <div className="flex gap-1">
-                        <Button variant="quiet" size="sm" disabled={index === 0} aria-label={`Move ${code} up`} onClick={() => items.move(index, index - 1)}>
+                        <Button variant="quiet" size="sm" disabled={index === 0} aria-label={`Move up ${code}`} onClick={() => items.move(index, index - 1)}>
                           Move up
                         </Button>
                         <Button variant="quiet" size="sm" aria-label={`Remove ${code}`} onClick={() => items.remove(index)}>
