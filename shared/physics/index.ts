@@ -30,9 +30,10 @@ export { reducedB2FromPotential, type ReducedB2Options } from './attraction/redu
 export { asakuraOosawaPairEnergy } from './attraction/asakura-oosawa-pair-energy';
 export { asakuraOosawaContactEnergy } from './attraction/asakura-oosawa-contact-energy';
 export { asakuraOosawaReducedB2 } from './attraction/asakura-oosawa-reduced-b2';
+export { asakuraOosawaAttraction, type DepletionAttraction } from './attraction/asakura-oosawa-attraction';
 export { hamakerSphereEnergy } from './attraction/hamaker-sphere-energy';
 export { doubleLayerEnergy } from './attraction/double-layer-energy';
-export { dlvoPairEnergy, dlvoReducedB2, type DlvoSystem } from './attraction/dlvo-pair-energy';
+export { dlvoPairEnergy, dlvoReducedB2, type DlvoSystem, type DlvoSummary } from './attraction/dlvo-pair-energy';
 export { attractionToReducedB2 } from './map/attraction-to-reduced-b2';
 export { attractionToMapY } from './map/attraction-to-map-y';
 

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { asakuraOosawaAttraction } from './asakura-oosawa-attraction';
 import { asakuraOosawaContactEnergy } from './asakura-oosawa-contact-energy';
 import { asakuraOosawaPairEnergy } from './asakura-oosawa-pair-energy';
 import { asakuraOosawaReducedB2 } from './asakura-oosawa-reduced-b2';
@@ -31,6 +32,15 @@ describe('Asakura–Oosawa depletion attraction', () => {
     expectRelative(asakuraOosawaReducedB2(0.1, 0.25), -1.2559058938454251, 1e-10);
     expectRelative(asakuraOosawaReducedB2(0.5, 0.3), -0.15303184813841436, 1e-9);
     expect(asakuraOosawaReducedB2(0.3, 0)).toBe(1);
+  });
+
+  it('asakuraOosawaAttraction gathers contact depth, range, B2* and τ', () => {
+    const attraction = asakuraOosawaAttraction(0.1, 0.25);
+    expect(attraction.contactEnergy).toBeCloseTo(4, 14);
+    expect(attraction.range).toBe(0.1);
+    expectRelative(attraction.b2, -1.2559058938454251, 1e-10);
+    expectRelative(attraction.tau!, 1 / (4 * (1 + 1.2559058938454251)), 1e-10);
+    expect(asakuraOosawaAttraction(0.1, 0).tau).toBeNull();
   });
 
   it('the depletion functions reject q ≤ 0, negative polymer fractions, NaN and Infinity', () => {

@@ -53,6 +53,6 @@ export function freeVolumeFluidSolidUnchecked(q: number, polymerReservoir: numbe
 export function freeVolumeSolidBranch(q: number, polymerReservoir: number): PhaseBranch {
   const trial = freeVolumeBranch('solid', q, polymerReservoir, FREE_VOLUME_SOLID_LOW, 1);
   if (trial.pressureDerivative(FREE_VOLUME_SOLID_LOW) > 0) return trial;
-  const onset = brentRoot(trial.pressureDerivative, FREE_VOLUME_SOLID_LOW, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
+  const onset = brentRoot((phi) => trial.pressureDerivative(phi), FREE_VOLUME_SOLID_LOW, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
   return freeVolumeBranch('solid', q, polymerReservoir, (onset ?? FREE_VOLUME_SOLID_LOW) * (1 + 1e-9), 1);
 }

@@ -21,8 +21,20 @@ export function freeVolumeFraction(phi: number, q: number): number {
   return freeVolumeTerms(phi, q).alpha;
 }
 
-/** α and its first two φ-derivatives (internal, unchecked); the thermodynamics needs all three. */
-export function freeVolumeTerms(phi: number, q: number): { alpha: number; slope: number; curvature: number } {
+/** α and its first two φ-derivatives. */
+export interface FreeVolumeTerms {
+  alpha: number;
+  slope: number;
+  curvature: number;
+}
+
+/** α, α′ and α″ (internal, unchecked); the thermodynamics needs all three. */
+export function freeVolumeTerms(phi: number, q: number): FreeVolumeTerms {
+  return freeVolumeTermsInto(phi, q, { alpha: 0, slope: 0, curvature: 0 });
+}
+
+/** The same, written into `out` (no allocation in the coexistence loops). Internal. */
+export function freeVolumeTermsInto(phi: number, q: number, out: FreeVolumeTerms): FreeVolumeTerms {
   const a = 3 * q + 3 * q * q + q * q * q;
   const b = 4.5 * q * q + 3 * q * q * q;
   const c = 3 * q * q * q;
@@ -34,9 +46,8 @@ export function freeVolumeTerms(phi: number, q: number): { alpha: number; slope:
   // α′ = −e^{−g}·h with h = 1 + (A + 2By + 3Cy²)(1 + y), since (1 − φ) = 1/(1 + y).
   const h = 1 + (a + 2 * b * y + 3 * c * y * y) * (1 + y);
   const hSlope = ((2 * b + 6 * c * y) * (1 + y) + (a + 2 * b * y + 3 * c * y * y)) * dyDphi;
-  return {
-    alpha: (1 - phi) * boltzmann,
-    slope: -boltzmann * h,
-    curvature: boltzmann * (exponentSlope * h - hSlope),
-  };
+  out.alpha = (1 - phi) * boltzmann;
+  out.slope = -boltzmann * h;
+  out.curvature = boltzmann * (exponentSlope * h - hSlope);
+  return out;
 }

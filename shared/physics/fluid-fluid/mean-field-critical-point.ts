@@ -1,7 +1,7 @@
 import { brentRoot } from '../numerics/brent-root';
 import { meanFieldSpinodalStrength, meanFieldSpinodalStrengthSlope } from './mean-field-spinodal-strength';
 
-let cached: { phi: number; b2: number } | null = null;
+let cached: Readonly<{ phi: number; b2: number }> | null = null;
 
 /**
  * Critical point of the Carnahan–Starling fluid with a mean-field attraction of strength
@@ -16,9 +16,14 @@ let cached: { phi: number; b2: number } | null = null;
  * @example meanFieldCriticalPoint().b2 // -1.650306764480...
  */
 export function meanFieldCriticalPoint(): { phi: number; b2: number } {
-  if (cached) return { ...cached };
+  return { ...meanFieldCriticalPointShared() };
+}
+
+/** The cached critical point itself (frozen; no copy), for the hot paths. Internal. */
+export function meanFieldCriticalPointShared(): Readonly<{ phi: number; b2: number }> {
+  if (cached) return cached;
   const phi = brentRoot(meanFieldSpinodalStrengthSlope, 0.05, 0.3, { absoluteTolerance: 1e-16 });
   if (phi === null) throw new Error('meanFieldCriticalPoint: no minimum found (internal error)');
-  cached = { phi, b2: 1 - meanFieldSpinodalStrength(phi) / 4 };
-  return { ...cached };
+  cached = Object.freeze({ phi, b2: 1 - meanFieldSpinodalStrength(phi) / 4 });
+  return cached;
 }

@@ -1,6 +1,6 @@
 import { brentRoot } from '../numerics/brent-root';
 import { requireInRange } from '../validation/require-in-range';
-import { meanFieldCriticalPoint } from './mean-field-critical-point';
+import { meanFieldCriticalPointShared } from './mean-field-critical-point';
 import { meanFieldSpinodalStrength } from './mean-field-spinodal-strength';
 
 /** Most negative B2* the mean-field fluid–fluid functions accept (the coexisting liquid is then at φ ≈ 0.68). */
@@ -26,7 +26,7 @@ export function meanFieldSpinodal(b2: number): { low: number; high: number } | n
 
 /** The spinodal without argument checks (internal). */
 export function meanFieldSpinodalUnchecked(b2: number): { low: number; high: number } | null {
-  const critical = meanFieldCriticalPoint();
+  const critical = meanFieldCriticalPointShared();
   if (b2 >= critical.b2) return null;
   const strength = 4 * (1 - b2);
   const excess = (phi: number) => meanFieldSpinodalStrength(phi) - strength;

@@ -5,7 +5,7 @@ import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireInRange } from '../validation/require-in-range';
 import { buildAxis, depletionPolymerForB2, genericB2FromY, genericYFromB2 } from './build-axis';
 import { resolveClassifierParameters } from './classifier-parameters';
-import { curveAt, domeAt } from './state-rule';
+import { curveAt } from './state-rule';
 import { buildDrawnCurves, type DrawnCurve } from './drawn-curves';
 import { genericLevelPhysics, depletionLevelPhysics } from './level-physics';
 import { createMapFrame, type MapFrame, type ReducedB2Table } from './map-frame';
@@ -181,26 +181,32 @@ function modelNames(model: MapModel): { model: string; binodal: string; spinodal
 function activeSegments(curve: DrawnCurve, drawn: MapFrame, stateAt: (phi: number, y: number) => string): number[] {
   const flags: number[] = [];
   const offset = 5e-4;
-  for (let i = 0; i + 1 < curve.points.length; i++) {
-    const [phiA, yA] = curve.points[i];
-    const [phiB, yB] = curve.points[i + 1];
-    const ax = phiA / FCC_CLOSE_PACKING;
-    const bx = phiB / FCC_CLOSE_PACKING;
-    const au = drawn.uFromY(yA);
-    const bu = drawn.uFromY(yB);
-    const length = Math.hypot(bx - ax, bu - au);
-    if (length === 0) { flags.push(0); continue; }
+  const points = curve.points;
+  const closePacking = FCC_CLOSE_PACKING;
+  for (let i = 0; i + 1 < points.length; i++) {
+    const ax = points[i][0] / closePacking;
+    const bx = points[i + 1][0] / closePacking;
+    const au = drawn.uFromY(points[i][1]);
+    const bu = drawn.uFromY(points[i + 1][1]);
+    const length = Math.sqrt((bx - ax) * (bx - ax) + (bu - au) * (bu - au));
+    if (length === 0) {
+      flags.push(0);
+      continue;
+    }
+    // Midpoint, pushed along the unit normal to either side.
+    const nx = (-(bu - au) / length) * offset;
+    const nu = ((bx - ax) / length) * offset;
     const mx = 0.5 * (ax + bx);
     const mu = 0.5 * (au + bu);
-    const nx = -(bu - au) / length;
-    const nu = (bx - ax) / length;
-    const side = (sign: number) => {
-      const x = Math.min(Math.max(mx + sign * offset * nx, 1e-9), 1 - 1e-9);
-      return stateAt(x * FCC_CLOSE_PACKING, drawn.yFromU(mu + sign * offset * nu));
-    };
-    flags.push(side(1) === side(-1) ? 0 : 1);
+    const plus = stateAt(clampUnit(mx + nx) * closePacking, drawn.yFromU(mu + nu));
+    const minus = stateAt(clampUnit(mx - nx) * closePacking, drawn.yFromU(mu - nu));
+    flags.push(plus === minus ? 0 : 1);
   }
   return flags;
+}
+
+function clampUnit(x: number): number {
+  return x < 1e-9 ? 1e-9 : x > 1 - 1e-9 ? 1 - 1e-9 : x;
 }
 
 /**
@@ -212,10 +218,9 @@ function drawnBoundaries(curves: DrawnCurve[], tables: ClassifierTables, theory:
   // The fluid is metastable wherever φ lies above the fluid side of fluid–crystal coexistence
   // (inside coexistence or in the crystal itself).
   const crystalMoreStable = (phi: number, u0: number) => phi > curveAt(tables.freezing, u0);
-  const insideBinodal = (phi: number, u0: number) => {
-    const dome = domeAt(tables.binodal, u0);
-    return dome !== null && phi > dome[0] && phi < dome[1];
-  };
+  const binodal = tables.binodal;
+  const insideBinodal = (phi: number, u0: number) =>
+    binodal !== null && u0 >= binodal.bottom && phi > curveAt(binodal.left, u0) && phi < curveAt(binodal.right, u0);
   const boundaries: MapBoundary[] = [];
   for (const curve of curves) {
     const approximate = curve.id === 'attractive-glass' || curve.id === 'gel';
@@ -263,8 +268,12 @@ function buildMarkers(model: MapModel, traced: TheoryCurves, theory: MapFrame, d
 }
 
 function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFrame, parameters: ClassifierParameters, crystalSuppressed: boolean, columns: number, rows: number): StateRegions {
-  const cells = new Array<number>(columns * rows);
+  const codes = new Uint8Array(columns * rows);
   const row = emptyRow();
+  // Imported bindings read once: the loop runs columns × rows times.
+  const closePacking = FCC_CLOSE_PACKING;
+  const rule = causeOnRow;
+  const codeOf = CODE_OF_CAUSE;
   for (let r = 0; r < rows; r++) {
     // Every cell of a row shares its attraction, hence its thresholds.
     const y = drawn.yFromU((r + 0.5) / rows);
@@ -272,11 +281,11 @@ function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFram
     const u0 = drawn.shift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(effectiveB2));
     ruleRowAt(tables, u0, effectiveB2, row);
     for (let column = 0; column < columns; column++) {
-      const phi = ((column + 0.5) / columns) * FCC_CLOSE_PACKING;
-      cells[r * columns + column] = CODE_OF_CAUSE[causeOnRow(row, parameters, crystalSuppressed, phi)];
+      const phi = ((column + 0.5) / columns) * closePacking;
+      codes[r * columns + column] = codeOf[rule(row, parameters, crystalSuppressed, phi)];
     }
   }
-  return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells };
+  return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells: Array.from(codes) };
 }
 
 function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, parameters: ClassifierParameters, polydispersity: number | null, crystalSuppressed: boolean): string[] {

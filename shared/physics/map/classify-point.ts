@@ -9,6 +9,9 @@ import { nearestActiveSegment, segmentIndexOf } from './segment-index';
 import { decideCause, emptyRow, stateOfCause } from './state-rule';
 import type { AttractionInput, ClassifierParameters, StateMap } from './types';
 
+// Read once: imported bindings may be accessors under some loaders, and this runs per point.
+const CLOSE_PACKING = FCC_CLOSE_PACKING;
+
 /**
  * Predicted state of a composition on a prebuilt map, its nearest state-changing boundary and
  * the margin to it (physics.md §5).
@@ -50,7 +53,7 @@ export function classifyPoint(map: StateMap, point: { phi: number; attraction: A
   const cause = decideCause(map.tables, used, crystalSuppressed, phi, u0, effectiveB2, row);
 
   const index = segmentIndexOf(map);
-  const nearest = nearestActiveSegment(index, phi / FCC_CLOSE_PACKING, drawn.uFromY(yDrawn));
+  const nearest = nearestActiveSegment(index, phi / CLOSE_PACKING, drawn.uFromY(yDrawn));
   if (nearest === null) {
     return new PointClassification(stateOfCause(cause), NO_BOUNDARY, 1, cause, row, phi, used, map.polydispersity, map.y.label, NaN, NaN);
   }
@@ -64,7 +67,7 @@ export function classifyPoint(map: StateMap, point: { phi: number; attraction: A
     used,
     map.polydispersity,
     map.y.label,
-    nearest.x * FCC_CLOSE_PACKING - phi,
+    nearest.x * CLOSE_PACKING - phi,
     drawn.yFromU(nearest.u) - yDrawn,
   );
 }

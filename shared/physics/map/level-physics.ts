@@ -35,7 +35,7 @@ export function genericLevelPhysics(theory: 'meanField' | 'baxterPY', frame: Map
     const b2 = b2At(u);
     const trial = meanFieldSolidBranch(b2, 0.5);
     if (trial.pressureDerivative(0.5) > 0) return trial;
-    const onset = brentRoot(trial.pressureDerivative, 0.5, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
+    const onset = brentRoot((phi) => trial.pressureDerivative(phi), 0.5, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
     return meanFieldSolidBranch(b2, (onset ?? 0.5) * (1 + 1e-9));
   });
   if (theory === 'meanField') {
