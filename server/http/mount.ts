@@ -16,10 +16,22 @@ export function mountRoutes(app: Express, specs: RouteSpec[], deps: AppDeps, lim
   for (const spec of specs) {
     const chain: RequestHandler[] = (spec.limiters ?? []).map((name) => limiters[name]);
     chain.push(authenticateAndAuthorise(spec, deps));
-    if (spec.upload) chain.push(spec.upload(deps));
+    if (spec.upload) chain.push(readableUpload(spec.upload(deps)));
     chain.push(runHandler(spec, deps));
     app[spec.method](spec.path, ...chain);
   }
+}
+
+/**
+ * Multer reports its own limits as MulterError (the error middleware maps those); anything
+ * else it throws means the multipart body itself could not be read: a 400, not a 500.
+ */
+function readableUpload(upload: RequestHandler): RequestHandler {
+  return (req, res, next) =>
+    upload(req, res, (error?: unknown) => {
+      if (!error || (error as { name?: string }).name === 'MulterError') return next(error);
+      next(badRequest(`The upload could not be read: ${String((error as Error).message ?? error).slice(0, 120)}`, 'files'));
+    });
 }
 
 function authenticateAndAuthorise(spec: RouteSpec, deps: AppDeps): RequestHandler {

@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-users-and-audit';
+import * as m0002 from './0002-team-data';
 
 export interface Migration {
   name: string;
@@ -8,4 +9,7 @@ export interface Migration {
 }
 
 /** Every migration, oldest first. Add new ones at the end; never edit one that has shipped. */
-export const MIGRATIONS: Migration[] = [{ name: '0001-users-and-audit', ...m0001 }];
+export const MIGRATIONS: Migration[] = [
+  { name: '0001-users-and-audit', ...m0001 },
+  { name: '0002-team-data', ...m0002 },
+];

@@ -3,12 +3,37 @@ import { User } from './user';
 import { UserToken } from './user-token';
 import { AuditEvent } from './audit-event';
 import { OutboxMessage } from './outbox-message';
+import { Programme } from './programme';
+import { ParticleSystem, Depletant, Solvent, Salt } from './materials';
+import { Recipe } from './recipe';
+import { Observation } from './observation';
+import { Attachment } from './attachment';
+import { ImportBatch } from './import-batch';
+import { Shortlist, ShortlistItem, ShortlistEvent } from './shortlist';
 
-export { User, UserToken, AuditEvent, OutboxMessage };
+export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent };
+
+const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent];
 
 /** Binds every model to the process's Sequelize instance and declares the associations. */
 export function initModels(sequelize: Sequelize) {
-  for (const model of [User, UserToken, AuditEvent, OutboxMessage]) model.initModel(sequelize);
+  for (const model of ALL) model.initModel(sequelize);
   UserToken.belongsTo(User, { foreignKey: 'userId', as: 'user' });
   AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  Recipe.belongsTo(Programme, { foreignKey: 'programmeId', as: 'programme' });
+  Recipe.belongsTo(ParticleSystem, { foreignKey: 'particleId', as: 'particle' });
+  Recipe.belongsTo(Solvent, { foreignKey: 'solventId', as: 'solvent' });
+  Recipe.belongsTo(Depletant, { foreignKey: 'depletantId', as: 'depletant' });
+  Recipe.belongsTo(Salt, { foreignKey: 'saltId', as: 'salt' });
+  Recipe.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Observation.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
+  Observation.belongsTo(User, { foreignKey: 'observerId', as: 'observer' });
+  Observation.hasMany(Attachment, { foreignKey: 'observationId', as: 'attachments' });
+  Attachment.belongsTo(User, { foreignKey: 'uploaderId', as: 'uploader' });
+  Shortlist.hasMany(ShortlistItem, { foreignKey: 'shortlistId', as: 'items' });
+  Shortlist.hasMany(ShortlistEvent, { foreignKey: 'shortlistId', as: 'events' });
+  Shortlist.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Shortlist.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
+  ShortlistItem.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
+  ShortlistEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
 }

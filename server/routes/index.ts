@@ -6,6 +6,13 @@ import { outboxRoutes } from './outbox/router';
 import { passwordResetRoutes } from './password-resets/router';
 import { sessionRoutes } from './session/router';
 import { userRoutes } from './users/router';
+import { programmeRoutes } from './programmes/router';
+import { materialRouteList } from './materials/router';
+import { recipeRoutes } from './recipes/router';
+import { observationRoutes } from './observations/router';
+import { attachmentRoutes } from './attachments/router';
+import { shortlistRoutes } from './shortlists/router';
+import { mapPointRoutes } from './map-points/router';
 
 /**
  * Every API route of the installation. The role-matrix test walks this list, so a route
@@ -20,4 +27,11 @@ export const ALL_ROUTES: RouteSpec[] = [
   ...userRoutes,
   ...auditRoutes,
   ...outboxRoutes,
+  ...programmeRoutes,
+  ...materialRouteList,
+  ...recipeRoutes,
+  ...observationRoutes,
+  ...attachmentRoutes,
+  ...shortlistRoutes,
+  ...mapPointRoutes,
 ];

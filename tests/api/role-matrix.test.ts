@@ -7,6 +7,8 @@ import { ANYONE, SIGNED_IN, concretePath, expectedOutcome, routeKey, type Expect
 import { hostileSessionCookies } from '../support/session-tokens';
 import { startTestStack, type TestStack } from '../support/test-stack';
 
+const EVERY_ROLE: Expectation = ['admin', 'manager', 'formulator', 'scientist', 'viewer'];
+
 /**
  * The declared allow-list, written out here on its own (not read from the routes), so
  * that a route whose declared access drifts from product.md fails this test. A new route
@@ -27,7 +29,79 @@ const ALLOW: Record<string, Expectation> = {
   'GET /api/audit-events': ['admin'],
   'GET /api/outbox': ['admin'],
   'GET /api/outbox/:id': ['admin'],
+  ...programmes(),
+  ...materials(),
+  ...recipes(),
+  ...observations(),
+  ...shortlists(),
+  'GET /api/map-points': EVERY_ROLE,
 };
+
+function programmes(): Record<string, Expectation> {
+  return {
+    'GET /api/programmes': EVERY_ROLE,
+    'GET /api/programmes/:id': EVERY_ROLE,
+    'POST /api/programmes': ['admin', 'manager'],
+    'PATCH /api/programmes/:id': ['admin', 'manager'],
+    'POST /api/programmes/:id/archive': ['admin', 'manager'],
+  };
+}
+
+/** The library is edited by formulators, managers and admins (issue: team data). */
+function materials(): Record<string, Expectation> {
+  const entries: Record<string, Expectation> = {};
+  for (const kind of ['particles', 'depletants', 'solvents', 'salts']) {
+    const base = `/api/materials/${kind}`;
+    entries[`GET ${base}`] = EVERY_ROLE;
+    entries[`GET ${base}/:id`] = EVERY_ROLE;
+    entries[`POST ${base}`] = ['admin', 'manager', 'formulator'];
+    entries[`PUT ${base}/:id`] = ['admin', 'manager', 'formulator'];
+    entries[`POST ${base}/:id/archive`] = ['admin', 'manager', 'formulator'];
+    entries[`POST ${base}/:id/restore`] = ['admin', 'manager', 'formulator'];
+  }
+  return entries;
+}
+
+function recipes(): Record<string, Expectation> {
+  return {
+    'GET /api/recipes': EVERY_ROLE,
+    'GET /api/recipes/code/:code': EVERY_ROLE,
+    'GET /api/recipes/:id': EVERY_ROLE,
+    'POST /api/recipes': ['admin', 'formulator'],
+    'PUT /api/recipes/:id': ['admin', 'formulator'],
+    'POST /api/recipes/:id/archive': ['admin', 'formulator'],
+    'POST /api/recipes/:id/restore': ['admin', 'formulator'],
+  };
+}
+
+function observations(): Record<string, Expectation> {
+  return {
+    'GET /api/observations': EVERY_ROLE,
+    'GET /api/observations/export': EVERY_ROLE,
+    'GET /api/observations/:id': EVERY_ROLE,
+    'POST /api/observations': ['admin', 'scientist'],
+    'PUT /api/observations/:id': ['admin', 'scientist'],
+    'POST /api/observations/:id/archive': ['admin', 'scientist'],
+    'POST /api/observations/import': ['admin', 'scientist'],
+    'POST /api/observations/:id/attachments': ['admin', 'scientist'],
+    'GET /api/attachments/:id': EVERY_ROLE,
+    'POST /api/attachments/:id/archive': ['admin', 'scientist'],
+  };
+}
+
+function shortlists(): Record<string, Expectation> {
+  return {
+    'GET /api/shortlists': EVERY_ROLE,
+    'GET /api/shortlists/:id': EVERY_ROLE,
+    'POST /api/shortlists': ['admin', 'formulator'],
+    'PUT /api/shortlists/:id': ['admin', 'formulator'],
+    'POST /api/shortlists/:id/submit': ['admin', 'formulator'],
+    'POST /api/shortlists/:id/reopen': ['admin', 'formulator'],
+    'POST /api/shortlists/:id/archive': ['admin', 'formulator'],
+    'POST /api/shortlists/:id/approve': ['admin', 'manager'],
+    'POST /api/shortlists/:id/return': ['admin', 'manager'],
+  };
+}
 
 let stack: TestStack;
 const cookies = {} as Record<Role, string>;

@@ -1,0 +1,143 @@
+import { stringify } from 'csv-stringify/sync';
+import { z } from 'zod';
+import { idParamSchema } from '../../../shared/schemas/common';
+import { IMPORT_COLUMNS, observationInputSchema, observationListQuerySchema } from '../../../shared/schemas/observations';
+import { badRequest } from '../../errors';
+import { route } from '../../http/route';
+import { Observation } from '../../models';
+import { presentObservation } from '../../presenters/observation';
+import { attachmentUpload, csvUpload, sniff, storeBytes } from '../../services/attachments';
+import { escapeCell } from '../../services/csv-cells';
+import { importObservations } from '../../services/observation-import';
+import { archiveObservation, createObservation, loadObservation, lockOwnObservation, observationIncludes, observationWhere, updateObservation } from '../../services/observations';
+import { Attachment } from '../../models';
+import { presentAttachment } from '../../presenters/observation';
+
+export const observationRoutes = [
+  route({
+    method: 'get',
+    path: '/api/observations',
+    access: 'data.read',
+    summary: 'The bench log, newest first, with filters',
+    query: observationListQuerySchema,
+    async handler({ query }) {
+      const { rows, count } = await Observation.findAndCountAll({
+        where: observationWhere(query),
+        include: observationIncludes(),
+        order: [['mixedAt', 'DESC'], ['id', 'DESC']],
+        limit: query.pageSize,
+        offset: (query.page - 1) * query.pageSize,
+        distinct: true,
+      });
+      const items = rows.map(presentObservation);
+      return { body: { items, total: count, page: query.page, pageSize: query.pageSize } };
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/observations/export',
+    access: 'data.read',
+    summary: 'The bench log as CSV (formula-looking cells escaped)',
+    query: observationListQuerySchema.omit({ page: true, pageSize: true }),
+    async handler({ query, res }) {
+      const rows = await Observation.findAll({ where: observationWhere({ ...query, page: 1, pageSize: 1 }), include: observationIncludes(), order: [['mixedAt', 'ASC'], ['id', 'ASC']] });
+      const header = [...IMPORT_COLUMNS, 'predicted_state', 'agrees', 'observer', 'observation_id'];
+      const lines = rows.map(presentObservation).map((o) =>
+        [o.recipeCode ?? '', o.mixedAt.slice(0, 10), o.ageDays, o.observedState, o.method, o.storageModulusPa, o.yieldStressPa, o.settledHeightPct, o.notes ?? '', o.predictedState ?? '', o.agrees === null ? '' : o.agrees ? 'yes' : 'no', o.observer?.name ?? '', o.id].map(escapeCell),
+      );
+      res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+      res.setHeader('Content-Disposition', `attachment; filename="gelwright-bench-log-${new Date().toISOString().slice(0, 10)}.csv"`);
+      res.send(stringify([header, ...lines]));
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/observations/import',
+    access: 'observations.write',
+    summary: 'Import a CSV of observations: all rows or none; ?dryRun=true only checks',
+    query: z.object({ dryRun: z.enum(['true', 'false']).default('false') }),
+    upload: csvUpload,
+    async handler(ctx) {
+      const file = ctx.req.file;
+      if (!file) throw badRequest('file: attach the CSV file under the field name "file"', 'file');
+      const text = new TextDecoder('utf-8').decode(file.buffer);
+      const key = ctx.req.get('Idempotency-Key') ?? null;
+      const { status, report } = await importObservations(ctx, { text, fileName: file.originalname.slice(0, 255) || null, idempotencyKey: key, dryRun: ctx.query.dryRun === 'true' });
+      return { status, body: { report } };
+    },
+  }),
+  route({
+    method: 'get',
+    path: '/api/observations/:id',
+    access: 'data.read',
+    summary: 'One observation with its attachments',
+    params: idParamSchema,
+    async handler({ params }) {
+      return { body: { observation: presentObservation(await loadObservation(params.id, null)) } };
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/observations',
+    access: 'observations.write',
+    summary: 'Record a bench outcome',
+    body: observationInputSchema,
+    async handler(ctx) {
+      return { status: 201, body: { observation: presentObservation(await createObservation(ctx, ctx.body)) } };
+    },
+  }),
+  route({
+    method: 'put',
+    path: '/api/observations/:id',
+    access: 'observations.write',
+    summary: 'Correct a bench outcome you recorded',
+    params: idParamSchema,
+    body: observationInputSchema,
+    async handler(ctx) {
+      return { body: { observation: presentObservation(await updateObservation(ctx, ctx.params.id, ctx.body)) } };
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/observations/:id/archive',
+    access: 'observations.write',
+    summary: 'Archive a bench outcome you recorded',
+    params: idParamSchema,
+    async handler(ctx) {
+      return { body: { observation: presentObservation(await archiveObservation(ctx, ctx.params.id)) } };
+    },
+  }),
+  route({
+    method: 'post',
+    path: '/api/observations/:id/attachments',
+    access: 'observations.write',
+    summary: 'Attach micrographs (PNG, JPEG, TIFF) or instrument files (CSV, TXT)',
+    params: idParamSchema,
+    upload: attachmentUpload,
+    async handler(ctx) {
+      const files = (ctx.req.files as Express.Multer.File[] | undefined) ?? [];
+      if (files.length === 0) throw badRequest('files: attach at least one file under the field name "files"', 'files');
+      const observation = await lockOwnObservation(ctx, ctx.params.id);
+      // Every file is checked before any is written: one bad file refuses the whole upload.
+      const sniffed = await Promise.all(files.map((f, i) => sniff(f, i)));
+      const written: { remove: () => Promise<void> }[] = [];
+      try {
+        const created = [];
+        for (const file of sniffed) {
+          const stored = await storeBytes(ctx.deps, file);
+          written.push(stored);
+          const row = await Attachment.create(
+            { observationId: observation.id, originalName: file.originalName, storedName: stored.storedName, mimeType: file.mimeType, sizeBytes: file.buffer.length, sha256: file.sha256, uploaderId: ctx.user!.id },
+            { transaction: ctx.transaction },
+          );
+          await ctx.audit({ action: 'attachment.uploaded', entityType: 'attachment', entityId: row.id, details: { observationId: observation.id, type: file.mimeType, bytes: file.buffer.length } });
+          created.push(row);
+        }
+        return { status: 201, body: { attachments: created.map(presentAttachment) } };
+      } catch (error) {
+        await Promise.all(written.map((w) => w.remove()));
+        throw error;
+      }
+    },
+  }),
+];

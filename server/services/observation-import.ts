@@ -1,0 +1,159 @@
+import { randomUUID } from 'node:crypto';
+import { parse } from 'csv-parse/sync';
+import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
+import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS, observationFields } from '../../shared/schemas/observations';
+import type { ImportReport, ImportRowProblem } from '../../shared/views/team-data';
+import { badRequest } from '../errors';
+import type { HandlerContext } from '../http/route';
+import { ImportBatch, Observation, Recipe } from '../models';
+import { unescapeCell } from './csv-cells';
+
+type Ctx = HandlerContext<unknown, unknown, unknown>;
+
+interface ParsedRow {
+  recipeId: number;
+  programmeId: number;
+  mixedAt: Date;
+  ageDays: number;
+  observedState: Observation['observedState'];
+  method: Observation['method'];
+  storageModulusPa: number | null;
+  yieldStressPa: number | null;
+  settledHeightPct: number | null;
+  notes: string | null;
+}
+
+const NUMERIC = { age_days: 'ageDays', storage_modulus_pa: 'storageModulusPa', yield_stress_pa: 'yieldStressPa', settled_height_pct: 'settledHeightPct' } as const;
+
+/** Reads the CSV text into records keyed by header; a malformed file is one problem on row 1. */
+function readCsv(text: string): { header: string[]; records: Record<string, string>[] } | ImportRowProblem {
+  try {
+    const rows = parse(text, { bom: true, skip_empty_lines: true, relax_column_count: false, trim: true }) as string[][];
+    if (rows.length === 0) return { row: 1, column: '', message: 'The file is empty' };
+    const header = rows[0].map((h) => h.trim().toLowerCase());
+    const records = rows.slice(1).map((cells) => Object.fromEntries(header.map((h, i) => [h, unescapeCell(cells[i] ?? '')])));
+    return { header, records };
+  } catch (error) {
+    const e = error as { lines?: number; message?: string };
+    return { row: e.lines ?? 1, column: '', message: `The file is not valid CSV: ${(e.message ?? '').replace(/^.*?: /, '').slice(0, 160)}` };
+  }
+}
+
+/**
+ * Validates every row before anything is written: the header, each cell, and that each
+ * recipe code names a live recipe. Row numbers count the header as row 1, like a spreadsheet.
+ */
+export async function validateImport(text: string, transaction: Transaction | null): Promise<{ report: ImportReport; rows: ParsedRow[] }> {
+  const read = readCsv(text);
+  if ('row' in read) return { report: { ok: false, rows: 0, imported: 0, problems: [read] }, rows: [] };
+  const problems: ImportRowProblem[] = [];
+  const missing = REQUIRED_IMPORT_COLUMNS.filter((c) => !read.header.includes(c));
+  for (const column of missing) problems.push({ row: 1, column, message: `The header lacks the column ${column}` });
+  const unknown = read.header.filter((h) => !(IMPORT_COLUMNS as readonly string[]).includes(h));
+  for (const column of unknown) problems.push({ row: 1, column, message: `Unknown column ${column}; expected ${IMPORT_COLUMNS.join(', ')}` });
+  if (read.records.length === 0) problems.push({ row: 1, column: '', message: 'The file has a header but no rows' });
+  if (read.records.length > IMPORT_MAX_ROWS) problems.push({ row: IMPORT_MAX_ROWS + 2, column: '', message: `At most ${IMPORT_MAX_ROWS} rows per import` });
+  if (problems.length) return { report: { ok: false, rows: read.records.length, imported: 0, problems }, rows: [] };
+
+  const codes = [...new Set(read.records.map((r) => r.recipe_code).filter(Boolean))];
+  const recipes = await Recipe.findAll({ where: { code: { [Op.in]: codes } }, attributes: ['id', 'code', 'programmeId', 'archivedAt'], transaction });
+  const byCode = new Map(recipes.map((r) => [r.code, r]));
+  const rows: ParsedRow[] = [];
+  read.records.forEach((record, index) => {
+    const row = index + 2;
+    const before = problems.length;
+    const fail = (column: string, message: string) => problems.push({ row, column, message });
+    const recipe = byCode.get(record.recipe_code);
+    if (!record.recipe_code) fail('recipe_code', 'Give the recipe code');
+    else if (!recipe) fail('recipe_code', `No recipe has the code ${record.recipe_code}`);
+    else if (recipe.archivedAt) fail('recipe_code', `Recipe ${record.recipe_code} is archived`);
+    const values: Record<string, unknown> = {};
+    const check = (column: string, key: keyof typeof observationFields, raw: unknown) => {
+      const result = observationFields[key].safeParse(raw);
+      if (result.success) values[key] = result.data;
+      else fail(column, result.error.issues[0].message);
+    };
+    check('mixed_on', 'mixedAt', record.mixed_on);
+    check('observed_state', 'observedState', record.observed_state?.toLowerCase());
+    check('method', 'method', record.method?.toLowerCase());
+    for (const [column, key] of Object.entries(NUMERIC)) {
+      const cell = record[column] ?? '';
+      if (cell === '' && column !== 'age_days') {
+        values[key] = null;
+        continue;
+      }
+      const number = /^[+-]?(\d+\.?\d*|\.\d+)([eE][+-]?\d+)?$/.test(cell) ? Number(cell) : NaN;
+      if (Number.isNaN(number)) fail(column, `${column} must be a number, got "${cell.slice(0, 40)}"`);
+      else check(column, key, number);
+    }
+    check('notes', 'notes', record.notes ?? '');
+    if (problems.length === before && recipe) {
+      rows.push({
+        recipeId: recipe.id,
+        programmeId: recipe.programmeId,
+        mixedAt: new Date(values.mixedAt as string),
+        ageDays: values.ageDays as number,
+        observedState: values.observedState as ParsedRow['observedState'],
+        method: values.method as ParsedRow['method'],
+        storageModulusPa: (values.storageModulusPa as number | null) ?? null,
+        yieldStressPa: (values.yieldStressPa as number | null) ?? null,
+        settledHeightPct: (values.settledHeightPct as number | null) ?? null,
+        notes: (values.notes as string | undefined) ?? null,
+      });
+    }
+  });
+  const ok = problems.length === 0;
+  return { report: { ok, rows: read.records.length, imported: 0, problems }, rows: ok ? rows : [] };
+}
+
+/**
+ * Imports a whole CSV in the route's transaction, or nothing. With an Idempotency-Key the
+ * batch row (which claims the key under a unique index) is written first: a retry, or a
+ * concurrent twin, finds it and gets the first answer back instead of a second import.
+ */
+export async function importObservations(ctx: Ctx, input: { text: string; fileName: string | null; idempotencyKey: string | null; dryRun: boolean }): Promise<{ status: number; report: ImportReport }> {
+  const transaction = ctx.transaction;
+  const userId = ctx.user!.id;
+  if (input.idempotencyKey !== null && !/^[\w.:-]{8,200}$/.test(input.idempotencyKey)) {
+    throw badRequest('Idempotency-Key: use 8 to 200 letters, digits, dots, colons, dashes or underscores', 'Idempotency-Key');
+  }
+  if (input.idempotencyKey && !input.dryRun) {
+    const earlier = await ImportBatch.findOne({ where: { userId, idempotencyKey: input.idempotencyKey }, transaction });
+    if (earlier) return { status: 200, report: { ...earlier.report, replayed: true } };
+  }
+  const { report, rows } = await validateImport(input.text, transaction);
+  if (!report.ok) return { status: 422, report };
+  if (input.dryRun) return { status: 200, report: { ...report, imported: 0 } };
+
+  const batchId = randomUUID();
+  const done: ImportReport = { ...report, imported: rows.length, batchId };
+  try {
+    await ImportBatch.create(
+      { id: batchId, idempotencyKey: input.idempotencyKey, userId, fileName: input.fileName, rowCount: rows.length, report: done },
+      { transaction },
+    );
+  } catch (error) {
+    if (error instanceof UniqueConstraintError && input.idempotencyKey) {
+      // A locking read sees the twin's committed row, which this transaction's snapshot does not.
+      const twin = await ImportBatch.findOne({ where: { userId, idempotencyKey: input.idempotencyKey }, transaction, lock: transaction?.LOCK.SHARE });
+      if (twin) return { status: 200, report: { ...twin.report, replayed: true } };
+    }
+    throw error;
+  }
+  for (let start = 0; start < rows.length; start += 500) {
+    await Observation.bulkCreate(
+      rows.slice(start, start + 500).map((r) => ({
+        ...r,
+        adhocPhi: null,
+        adhocReducedB2: null,
+        adhocDescription: null,
+        adhocPredictedState: null,
+        observerId: userId,
+        importBatchId: batchId,
+      })),
+      { transaction },
+    );
+  }
+  await ctx.audit({ action: 'observation.imported', entityType: 'import_batch', entityId: batchId, details: { rows: rows.length, file: input.fileName } });
+  return { status: 201, report: done };
+}

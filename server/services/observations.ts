@@ -1,0 +1,109 @@
+import { Op, Sequelize, type Transaction, type WhereOptions } from 'sequelize';
+import type { ObservationInput, ObservationListQuery } from '../../shared/schemas/observations';
+import { badRequest, forbidden, notFound } from '../errors';
+import type { HandlerContext } from '../http/route';
+import { Attachment, Observation, Recipe, User } from '../models';
+import { requireProgramme } from './lookups';
+import { predictAdhoc } from './predictions';
+
+type Ctx = HandlerContext<unknown, unknown, unknown>;
+
+export const observationIncludes = () => [
+  { model: Recipe, as: 'recipe', attributes: ['id', 'code', 'predictedState', 'programmeId'] },
+  { model: User, as: 'observer', attributes: ['id', 'name'] },
+  { model: Attachment, as: 'attachments', include: [{ model: User, as: 'uploader', attributes: ['id', 'name'] }] },
+];
+
+export async function loadObservation(id: number, transaction: Transaction | null) {
+  const observation = await Observation.findByPk(id, { include: observationIncludes(), transaction });
+  if (!observation) throw notFound('Observation');
+  return observation;
+}
+
+/** The where-clause of a bench-log query; "disagreeing" compares with the recipe's current prediction. */
+export function observationWhere(query: ObservationListQuery): WhereOptions {
+  const where: Record<string | symbol, unknown> = {};
+  if (query.archived !== 'all') where.archivedAt = query.archived === 'true' ? { [Op.ne]: null } : null;
+  if (query.programme) where.programmeId = query.programme;
+  if (query.recipe) where.recipeId = query.recipe;
+  if (query.state) where.observedState = query.state;
+  if (query.method) where.method = query.method;
+  if (query.minAgeDays !== undefined || query.maxAgeDays !== undefined) {
+    where.ageDays = { ...(query.minAgeDays !== undefined ? { [Op.gte]: query.minAgeDays } : {}), ...(query.maxAgeDays !== undefined ? { [Op.lte]: query.maxAgeDays } : {}) };
+  }
+  if (query.disagreeing) {
+    // Compared with the recipe's current prediction, or the ad-hoc one; "unclear" never disagrees.
+    // A correlated subquery, not the joined alias: paged queries put the joins outside the WHERE.
+    const predicted = 'COALESCE((SELECT r.predicted_state FROM recipes r WHERE r.id = `Observation`.`recipe_id`), `Observation`.`adhoc_predicted_state`)';
+    const disagrees = `(\`Observation\`.\`observed_state\` <> 'unclear' AND ${predicted} IS NOT NULL AND CAST(\`Observation\`.\`observed_state\` AS CHAR) <> CAST(${predicted} AS CHAR))`;
+    where[Op.and] = [Sequelize.literal(query.disagreeing === 'true' ? disagrees : `NOT ${disagrees}`)];
+  }
+  return where;
+}
+
+async function resolveSubject(ctx: Ctx, input: ObservationInput) {
+  if (input.recipeId !== undefined) {
+    const recipe = await Recipe.findByPk(input.recipeId, { transaction: ctx.transaction });
+    if (!recipe) throw badRequest('recipeId: no such recipe', 'recipeId');
+    if (recipe.archivedAt) throw badRequest(`recipeId: recipe ${recipe.code} is archived`, 'recipeId');
+    return { programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null };
+  }
+  const adhoc = input.adhoc!;
+  await requireProgramme(adhoc.programmeId, ctx.transaction);
+  return {
+    programmeId: adhoc.programmeId,
+    recipeId: null,
+    adhocPhi: adhoc.phi,
+    adhocReducedB2: adhoc.reducedB2,
+    adhocDescription: adhoc.description ?? null,
+    adhocPredictedState: await predictAdhoc(adhoc.programmeId, adhoc.phi, adhoc.reducedB2, ctx.transaction),
+  };
+}
+
+function measured(input: ObservationInput) {
+  return {
+    mixedAt: new Date(input.mixedAt),
+    ageDays: input.ageDays,
+    observedState: input.observedState,
+    method: input.method,
+    storageModulusPa: input.storageModulusPa ?? null,
+    yieldStressPa: input.yieldStressPa ?? null,
+    settledHeightPct: input.settledHeightPct ?? null,
+    notes: input.notes ?? null,
+  };
+}
+
+export async function createObservation(ctx: Ctx, input: ObservationInput) {
+  const subject = await resolveSubject(ctx, input);
+  const observation = await Observation.create({ ...subject, ...measured(input), observerId: ctx.user!.id, importBatchId: null }, { transaction: ctx.transaction });
+  await ctx.audit({ action: 'observation.created', entityType: 'observation', entityId: observation.id, details: { recipeId: subject.recipeId, state: input.observedState } });
+  return loadObservation(observation.id, ctx.transaction);
+}
+
+/** A bench record is changed by the person who observed it, or an administrator. */
+export async function lockOwnObservation(ctx: Ctx, id: number) {
+  const observation = await Observation.findByPk(id, { transaction: ctx.transaction, lock: ctx.transaction?.LOCK.UPDATE });
+  if (!observation) throw notFound('Observation');
+  if (observation.observerId !== ctx.user!.id && ctx.user!.role !== 'admin') throw forbidden('Only the observer or an administrator may change this record');
+  return observation;
+}
+
+export async function updateObservation(ctx: Ctx, id: number, input: ObservationInput) {
+  const observation = await lockOwnObservation(ctx, id);
+  const subject = await resolveSubject(ctx, input);
+  observation.set({ ...subject, ...measured(input) });
+  const changed = observation.changed() || [];
+  await observation.save({ transaction: ctx.transaction });
+  await ctx.audit({ action: 'observation.updated', entityType: 'observation', entityId: id, details: { changed } });
+  return loadObservation(id, ctx.transaction);
+}
+
+export async function archiveObservation(ctx: Ctx, id: number) {
+  const observation = await lockOwnObservation(ctx, id);
+  if (!observation.archivedAt) {
+    observation.archivedAt = new Date();
+    await observation.save({ transaction: ctx.transaction });
+    await ctx.audit({ action: 'observation.archived', entityType: 'observation', entityId: id });
+  }
+  return loadObservation(id, ctx.transaction);
+}

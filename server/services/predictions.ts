@@ -1,0 +1,82 @@
+import type { Transaction } from 'sequelize';
+import { buildStateMap, classifyPoint, PhysicsArgumentError, type ClassifierParameters, type MapModel, type StateMap } from '../../shared/physics';
+import { recipeAttraction } from '../../shared/physics/recipe/recipe-attraction';
+import { deriveRecipe, physicsInputFor, recipeFieldOf, type RecipeMaterials } from '../../shared/recipe-derivation';
+import type { RecipeInput } from '../../shared/schemas/recipes';
+import type { PredictedState } from '../../shared/states';
+import type { RecipeDerived } from '../../shared/views/team-data';
+import { badRequest } from '../errors';
+import { Depletant, ParticleSystem, Salt, Solvent } from '../models';
+
+const CACHE_SIZE = 64;
+const maps = new Map<string, StateMap>();
+
+/**
+ * Maps are built once per model, parameters and polydispersity and kept (least recently used
+ * out): a programme's recipes share a few maps, so saving and re-predicting stay fast.
+ */
+export function cachedStateMap(model: MapModel, parameters: Partial<ClassifierParameters> | undefined, polydispersity: number | undefined): StateMap {
+  const key = JSON.stringify([model, parameters ?? null, polydispersity ?? null]);
+  const hit = maps.get(key);
+  if (hit) {
+    maps.delete(key);
+    maps.set(key, hit);
+    return hit;
+  }
+  const map = buildStateMap(model, { parameters, polydispersity });
+  maps.set(key, map);
+  if (maps.size > CACHE_SIZE) maps.delete(maps.keys().next().value!);
+  return map;
+}
+
+/** The library rows of a recipe, or a 400 naming the field that points nowhere. */
+export async function recipeMaterials(input: RecipeInput, transaction: Transaction | null): Promise<RecipeMaterials> {
+  const particle = await ParticleSystem.findByPk(input.particleId, { transaction });
+  if (!particle) throw badRequest('particleId: no such particle system', 'particleId');
+  const solvent = await Solvent.findByPk(input.solventId, { transaction });
+  if (!solvent) throw badRequest('solventId: no such solvent', 'solventId');
+  const a = input.attraction;
+  const depletant = a.source === 'depletion' ? await Depletant.findByPk(a.depletantId, { transaction }) : null;
+  if (a.source === 'depletion' && !depletant) throw badRequest('attraction.depletantId: no such depletant', 'attraction.depletantId');
+  const salt = a.source === 'salt' ? await Salt.findByPk(a.saltId, { transaction }) : null;
+  if (a.source === 'salt' && !salt) throw badRequest('attraction.saltId: no such salt', 'attraction.saltId');
+  return { particle, solvent, depletant, salt };
+}
+
+/** Calibrated classifier parameters of a programme, once calibrations exist; none for now. */
+export async function programmeParameters(_programmeId: number, _transaction: Transaction | null): Promise<{ parameters?: Partial<ClassifierParameters>; calibration: { id: number; acceptedAt: string } | null }> {
+  return { calibration: null };
+}
+
+/**
+ * What a recipe stores, derived with shared/physics on the server. Physics complaints about the
+ * composition become a 400 on the form field they concern.
+ */
+export async function deriveForRecipe(input: RecipeInput, transaction: Transaction | null): Promise<RecipeDerived> {
+  const materials = await recipeMaterials(input, transaction);
+  const { parameters, calibration } = await programmeParameters(input.programmeId, transaction);
+  try {
+    const physics = physicsInputFor(input, materials, parameters);
+    const kelvin = input.temperatureC + 273.15;
+    // Work out the map the recipe belongs on, so a cached one can be handed over.
+    const phiGuess = physics.particleVolumeFraction ?? Math.min(0.7, physics.particleMassFraction ?? 0.1);
+    const model = recipeAttraction(physics, phiGuess, kelvin).mapModel;
+    const map = cachedStateMap(model, parameters, materials.particle.polydispersityPct);
+    return deriveRecipe(input, materials, { parameters, map, calibration });
+  } catch (error) {
+    if (error instanceof PhysicsArgumentError) throw badRequest(`${recipeFieldOf(error)}: ${error.message}`, recipeFieldOf(error));
+    throw error;
+  }
+}
+
+/** The predicted state of an ad-hoc composition, placed by its B2* on the generic map. */
+export async function predictAdhoc(programmeId: number, phi: number, reducedB2: number, transaction: Transaction | null): Promise<PredictedState | null> {
+  const { parameters } = await programmeParameters(programmeId, transaction);
+  try {
+    const map = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, parameters, undefined);
+    return classifyPoint(map, { phi, attraction: { kind: 'b2', value: reducedB2 } }, parameters).state;
+  } catch (error) {
+    if (error instanceof PhysicsArgumentError) throw badRequest(`adhoc: ${error.message}`, 'adhoc.phi');
+    throw error;
+  }
+}

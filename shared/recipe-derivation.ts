@@ -1,0 +1,98 @@
+import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters, type StateMap } from './physics';
+import type { RecipeInput as PhysicsRecipeInput } from './physics/recipe/recipe-types';
+import type { RecipeInput } from './schemas/recipes';
+import type { DepletantView, ParticleView, RecipeDerived, SaltView, SolventView } from './views/team-data';
+
+/** The library rows a recipe refers to (only the fields the physics reads). */
+export interface RecipeMaterials {
+  particle: Pick<ParticleView, 'radiusNm' | 'densityGcm3' | 'polydispersityPct' | 'surfacePotentialMv' | 'hamakerZj'>;
+  solvent: Pick<SolventView, 'viscosityMPas' | 'densityGcm3' | 'relativePermittivity'>;
+  depletant?: Pick<DepletantView, 'molarMassKgMol' | 'rgNm' | 'rgPrefactorNm' | 'rgExponent'> | null;
+  salt?: Pick<SaltView, 'valence'> | null;
+}
+
+/**
+ * The physics input of a recipe: our stored units turned into shared/physics' (zJ → J for the
+ * Hamaker constant; polymer concentration per litre of solvent). Used by the server on save
+ * and by the editor's live preview, so both compute the same numbers.
+ */
+export function physicsInputFor(recipe: RecipeInput, materials: RecipeMaterials, parameters?: Partial<ClassifierParameters>): PhysicsRecipeInput {
+  const { particle, solvent } = materials;
+  const input: PhysicsRecipeInput = {
+    particle: {
+      radiusNm: particle.radiusNm,
+      densityGPerCm3: particle.densityGcm3,
+      polydispersityPercent: particle.polydispersityPct,
+      ...(particle.surfacePotentialMv != null ? { surfacePotentialMv: particle.surfacePotentialMv } : {}),
+      ...(particle.hamakerZj != null ? { hamakerJ: particle.hamakerZj * 1e-21 } : {}),
+    },
+    solvent: {
+      viscosityMPaS: solvent.viscosityMPas,
+      densityGPerCm3: solvent.densityGcm3,
+      ...(solvent.relativePermittivity != null ? { relativePermittivity: solvent.relativePermittivity } : {}),
+    },
+    temperatureC: recipe.temperatureC,
+    ...(recipe.fraction.kind === 'mass' ? { particleMassFraction: recipe.fraction.value } : { particleVolumeFraction: recipe.fraction.value }),
+    ...(parameters ? { parameters } : {}),
+  };
+  const a = recipe.attraction;
+  if (a.source === 'depletion' && materials.depletant) {
+    const d = materials.depletant;
+    input.depletant = {
+      molarMassKgPerMol: d.molarMassKgMol,
+      ...(d.rgNm != null ? { radiusOfGyrationNm: d.rgNm } : { scaling: { prefactorNm: d.rgPrefactorNm!, exponent: d.rgExponent! } }),
+      concentrationGPerL: a.concentrationGL,
+      concentrationBasis: 'solvent',
+    };
+  }
+  if (a.source === 'salt' && materials.salt) input.salt = { concentrationMM: a.concentrationMM, valence: materials.salt.valence };
+  if (a.source === 'direct') input.direct = { contactEnergyKT: a.contactEnergyKT, range: a.rangeSigma };
+  return input;
+}
+
+/** Which field of our recipe form a physics complaint is about. */
+export function recipeFieldOf(error: PhysicsArgumentError): string {
+  const argument = error.argument;
+  if (argument.startsWith('particleVolumeFraction') || argument.startsWith('particleMassFraction')) return 'fraction.value';
+  if (argument === 'temperatureC') return 'temperatureC';
+  if (argument.startsWith('particle.')) return 'particleId';
+  if (argument.startsWith('solvent.')) return 'solventId';
+  if (argument.startsWith('depletant.concentration')) return 'attraction.concentrationGL';
+  if (argument.startsWith('depletant')) return 'attraction.depletantId';
+  if (argument.startsWith('salt.concentration')) return 'attraction.concentrationMM';
+  if (argument.startsWith('salt')) return 'attraction.saltId';
+  if (argument === 'direct.contactEnergyKT') return 'attraction.contactEnergyKT';
+  if (argument.startsWith('direct')) return 'attraction.rangeSigma';
+  return 'attraction';
+}
+
+/**
+ * Derives and shapes what a recipe stores. `map` is an optional prebuilt map (the server keeps
+ * one per model); `calibration` labels the result when calibrated parameters were used.
+ */
+export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, options: { parameters?: Partial<ClassifierParameters>; map?: StateMap; calibration?: { id: number; acceptedAt: string } | null } = {}): RecipeDerived {
+  const d = deriveRecipeParameters(physicsInputFor(recipe, materials, options.parameters), { map: options.map });
+  return {
+    modelVersion: d.modelVersion,
+    phi: d.phi,
+    sizeRatio: d.q,
+    polymerReservoir: d.reservoirPolymerFraction,
+    polymerSystem: d.systemPolymerFraction,
+    overlapConcentrationGL: d.overlapConcentrationGPerL,
+    contactEnergyKT: d.contactEnergyKT,
+    rangeSigma: d.rangeSigma,
+    reducedB2: d.b2,
+    stickiness: d.tau,
+    debyeLengthNm: d.debyeLengthNm,
+    closestApproachNm: d.closestApproachNm,
+    predictedState: d.predictedState,
+    nearestBoundary: d.nearestBoundary,
+    margin: d.margin,
+    marginDescription: d.marginDescription,
+    reason: d.reason,
+    map: d.mapModel.kind === 'depletion' ? { kind: 'depletion', q: d.mapModel.q } : { kind: 'generic', theory: d.mapModel.theory },
+    timescales: { diffusionM2s: d.diffusionM2PerS, brownianTimeS: d.brownianTimeS, gravitationalPeclet: d.gravitationalPeclet, settlingSpeedMs: d.settlingSpeedMPerS },
+    warnings: d.warnings,
+    calibration: options.calibration ?? null,
+  };
+}

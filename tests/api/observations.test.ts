@@ -1,0 +1,177 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { parse } from 'csv-parse/sync';
+import { ImportBatch, Observation, type Programme } from '../../server/models';
+import { buildUser, signedInAgent } from '../support/builders';
+import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
+import { tableCounts } from '../support/table-counts';
+import { startTestStack, type TestStack } from '../support/test-stack';
+
+let stack: TestStack;
+let lib: Library;
+let programme: Programme;
+let scientist: Awaited<ReturnType<typeof signedInAgent>>;
+let formulator: Awaited<ReturnType<typeof signedInAgent>>;
+let recipe: { id: number; code: string; derived: { predictedState: string } };
+
+beforeAll(async () => {
+  stack = await startTestStack();
+  lib = await buildLibrary();
+  programme = await buildProgramme();
+  scientist = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
+  formulator = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+  recipe = (await formulator.post('/api/recipes').send(recipeInput(programme, lib))).body.recipe;
+});
+afterAll(() => stack.close());
+
+const observation = (overrides: Record<string, unknown> = {}) => ({
+  recipeId: recipe.id,
+  mixedAt: '2026-11-02',
+  ageDays: 7,
+  observedState: 'gel',
+  method: 'rheology',
+  storageModulusPa: 35,
+  ...overrides,
+});
+
+function csv(rows: string[][]) {
+  return Buffer.from(rows.map((r) => r.join(',')).join('\n') + '\n');
+}
+const HEADER = ['recipe_code', 'mixed_on', 'age_days', 'observed_state', 'method', 'storage_modulus_pa', 'yield_stress_pa', 'settled_height_pct', 'notes'];
+
+describe('POST /api/observations', () => {
+  it('records an outcome for a recipe and says whether it agrees with the prediction', async () => {
+    const same = await scientist.post('/api/observations').send(observation({ observedState: recipe.derived.predictedState }));
+    expect(same.status).toBe(201);
+    expect(same.body.observation).toMatchObject({ recipeCode: recipe.code, predictedState: recipe.derived.predictedState, agrees: true, storageModulusPa: 35 });
+    const other = recipe.derived.predictedState === 'fluid' ? 'gel' : 'fluid';
+    const differs = await scientist.post('/api/observations').send(observation({ observedState: other }));
+    expect(differs.body.observation.agrees).toBe(false);
+    const unclear = await scientist.post('/api/observations').send(observation({ observedState: 'unclear' }));
+    expect(unclear.body.observation.agrees).toBeNull();
+    const disagreeing = await scientist.get(`/api/observations?recipe=${recipe.id}&disagreeing=true`);
+    expect(disagreeing.body.items.map((o: { id: number }) => o.id)).toEqual([differs.body.observation.id]);
+  });
+
+  it('records an ad-hoc composition with its own prediction', async () => {
+    const response = await scientist.post('/api/observations').send({ ...observation(), recipeId: undefined, adhoc: { programmeId: programme.id, phi: 0.2, reducedB2: -6, description: 'leftover batch, no recipe' } });
+    expect(response.status).toBe(201);
+    expect(response.body.observation.adhoc).toEqual({ phi: 0.2, reducedB2: -6, description: 'leftover batch, no recipe' });
+    expect(['fluid', 'gel', 'glass', 'crystal', 'separated']).toContain(response.body.observation.predictedState);
+  });
+
+  it('refuses both a recipe and an ad-hoc composition, a future-less date, a negative age', async () => {
+    const before = await tableCounts(stack.sequelize);
+    expect((await scientist.post('/api/observations').send({ ...observation(), adhoc: { programmeId: programme.id, phi: 0.2, reducedB2: -2 } })).status).toBe(400);
+    const date = await scientist.post('/api/observations').send(observation({ mixedAt: '2026-13-45' }));
+    expect(date.body.error.field).toBe('mixedAt');
+    const age = await scientist.post('/api/observations').send(observation({ ageDays: -1 }));
+    expect(age.body.error.field).toBe('ageDays');
+    expect(await tableCounts(stack.sequelize)).toEqual(before);
+  });
+
+  it('lets only the observer or an administrator correct or archive a record', async () => {
+    const mine = (await scientist.post('/api/observations').send(observation())).body.observation;
+    const colleague = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
+    expect((await colleague.put(`/api/observations/${mine.id}`).send(observation({ ageDays: 8 }))).status).toBe(403);
+    expect((await colleague.post(`/api/observations/${mine.id}/archive`)).status).toBe(403);
+    expect((await scientist.put(`/api/observations/${mine.id}`).send(observation({ ageDays: 8 }))).body.observation.ageDays).toBe(8);
+    const admin = await signedInAgent(stack.app, await buildUser({ role: 'admin' }));
+    expect((await admin.post(`/api/observations/${mine.id}/archive`)).body.observation.archived).toBe(true);
+    expect(await Observation.count({ where: { id: mine.id } })).toBe(1); // archived, never deleted
+  });
+});
+
+describe('POST /api/observations/import', () => {
+  it('with one bad row imports nothing and reports the row and column; fixed, it imports every row', async () => {
+    const rows = [
+      [recipe.code, '2026-10-01', '0', 'fluid', 'visual', '', '', '', 'day 0'],
+      [recipe.code, '2026-10-01', '1', 'gel', 'rheology', '12.5', '0.8', '', ''],
+      [recipe.code, '2026-10-01', 'seven', 'gel', 'visual', '', '', '', ''],
+      [recipe.code, '2026-10-01', '30', 'collapsed', 'visual', '', '', '62', 'clear layer on top'],
+    ];
+    const before = await Observation.count();
+    const bad = await scientist.post('/api/observations/import').attach('file', csv([HEADER, ...rows]), 'batch.csv');
+    expect(bad.status).toBe(422);
+    expect(bad.body.report.ok).toBe(false);
+    expect(bad.body.report.problems).toEqual([{ row: 4, column: 'age_days', message: 'age_days must be a number, got "seven"' }]);
+    expect(await Observation.count()).toBe(before);
+
+    rows[2][2] = '7';
+    const good = await scientist.post('/api/observations/import').attach('file', csv([HEADER, ...rows]), 'batch.csv');
+    expect(good.status).toBe(201);
+    expect(good.body.report).toMatchObject({ ok: true, rows: 4, imported: 4 });
+    expect(await Observation.count()).toBe(before + 4);
+    expect(await Observation.count({ where: { importBatchId: good.body.report.batchId } })).toBe(4);
+  });
+
+  it('reports unknown recipe codes, states and methods per row', async () => {
+    const response = await scientist.post('/api/observations/import').attach(
+      'file',
+      csv([HEADER, ['ZZ-0001', '2026-10-01', '1', 'gel', 'visual', '', '', '', ''], [recipe.code, '2026-10-01', '1', 'jelly', 'visual', '', '', '', ''], [recipe.code, '2026-10-01', '1', 'gel', 'taste', '', '', '', '']]),
+      'x.csv',
+    );
+    expect(response.status).toBe(422);
+    expect(response.body.report.problems.map((p: { row: number; column: string }) => [p.row, p.column])).toEqual([
+      [2, 'recipe_code'],
+      [3, 'observed_state'],
+      [4, 'method'],
+    ]);
+  });
+
+  it('checks only, writing nothing, with ?dryRun=true', async () => {
+    const before = await Observation.count();
+    const response = await scientist.post('/api/observations/import?dryRun=true').attach('file', csv([HEADER, [recipe.code, '2026-10-01', '1', 'gel', 'visual', '', '', '', '']]), 'x.csv');
+    expect(response.status).toBe(200);
+    expect(response.body.report).toMatchObject({ ok: true, rows: 1, imported: 0 });
+    expect(await Observation.count()).toBe(before);
+  });
+
+  it('imports once when the same Idempotency-Key is sent twice', async () => {
+    const key = `retry-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const file = csv([HEADER, [recipe.code, '2026-10-02', '2', 'gel', 'visual', '', '', '', 'retried upload']]);
+    const before = await Observation.count();
+    const first = await scientist.post('/api/observations/import').set('Idempotency-Key', key).attach('file', file, 'r.csv');
+    const second = await scientist.post('/api/observations/import').set('Idempotency-Key', key).attach('file', file, 'r.csv');
+    expect(first.status).toBe(201);
+    expect(second.status).toBe(200);
+    expect(second.body.report).toMatchObject({ imported: 1, replayed: true, batchId: first.body.report.batchId });
+    expect(await Observation.count()).toBe(before + 1);
+    expect(await ImportBatch.count({ where: { idempotencyKey: key } })).toBe(1);
+  });
+
+  it('imports once when two uploads with the same key race', async () => {
+    const key = `race-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const file = csv([HEADER, [recipe.code, '2026-10-03', '3', 'gel', 'visual', '', '', '', 'raced upload']]);
+    const before = await Observation.count();
+    const answers = await Promise.all([1, 2, 3].map(() => scientist.post('/api/observations/import').set('Idempotency-Key', key).attach('file', file, 'r.csv')));
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 200, 201]);
+    expect(await Observation.count()).toBe(before + 1);
+  });
+
+  it('stores formula-looking cells as text and escapes them again on export', async () => {
+    const formula = '=HYPERLINK("http://evil.example","click")';
+    const response = await scientist.post('/api/observations/import').attach('file', Buffer.from(`${HEADER.join(',')}\n${recipe.code},2026-10-04,4,gel,visual,,,,"${formula.replace(/"/g, '""')}"\n`), 'f.csv');
+    expect(response.status).toBe(201);
+    const stored = await Observation.findOne({ where: { importBatchId: response.body.report.batchId } });
+    expect(stored?.notes).toBe(formula);
+    const exported = await scientist.get(`/api/observations/export?recipe=${recipe.id}`);
+    expect(exported.headers['content-type']).toMatch(/text\/csv/);
+    const records = parse(exported.text, { columns: true }) as Record<string, string>[];
+    const mine = records.find((r) => r.observation_id === String(stored!.id))!;
+    expect(mine.notes).toBe(`'${formula}`);
+    // A round trip through our own export does not add a second apostrophe.
+    const again = await scientist.post('/api/observations/import').attach('file', Buffer.from(`${HEADER.join(',')}\n${recipe.code},2026-10-04,4,gel,visual,,,,"'${formula.replace(/"/g, '""')}"\n`), 'g.csv');
+    const reimported = await Observation.findOne({ where: { importBatchId: again.body.report.batchId } });
+    expect(reimported?.notes).toBe(formula);
+  });
+
+  it('refuses a file that is not CSV, a missing column, and a viewer', async () => {
+    const garbage = await scientist.post('/api/observations/import').attach('file', Buffer.from('"unterminated,quote\nx,y'), 'g.csv');
+    expect(garbage.status).toBe(422);
+    expect(garbage.body.report.problems[0].message).toMatch(/not valid CSV/);
+    const missing = await scientist.post('/api/observations/import').attach('file', Buffer.from('recipe_code,age_days\nX,1\n'), 'm.csv');
+    expect(missing.body.report.problems.map((p: { column: string }) => p.column)).toEqual(['mixed_on', 'observed_state', 'method']);
+    const viewer = await signedInAgent(stack.app, await buildUser({ role: 'viewer' }));
+    expect((await viewer.post('/api/observations/import').attach('file', csv([HEADER]), 'v.csv')).status).toBe(403);
+  });
+});
