@@ -1,5 +1,6 @@
 import { spawn } from 'node:child_process';
-import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, readdirSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
 import { dirname, join } from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { loadConfig } from '../server/config';
@@ -8,7 +9,7 @@ import { migrateUp } from '../server/migrator';
 import { buildClientIfStale } from './lib/build-client';
 import { ensureDebianPackage } from './lib/debian';
 import { dropDatabases, ensureDatabase, mariaInstance, startMaria, stopMaria } from './lib/mariadb';
-import { TEST_DB_PORT, TEST_WORKERS, testDatabases, testEnvironment } from './lib/test-env';
+import { TEST_WORKERS, testDatabases, testEnvironment } from './lib/test-env';
 
 const root = join(dirname(fileURLToPath(import.meta.url)), '..');
 
@@ -22,8 +23,13 @@ async function main(): Promise<number> {
   Object.assign(process.env, env);
   ensureDebianPackage('chromium', 'chromium', ['/usr/bin/chromium']);
 
-  const instance = mariaInstance(root, 'mariadb-test', TEST_DB_PORT);
-  console.log(`test: MariaDB on 127.0.0.1:${TEST_DB_PORT} (data in ${instance.dataDir})`);
+  // Each run has its own instance (own port, own data folder), so two runs never share a database.
+  removeStaleTestInstances();
+  const port = await freePort();
+  env.DB_PORT = String(port);
+  process.env.DB_PORT = env.DB_PORT;
+  const instance = mariaInstance(root, `mariadb-test-${process.pid}`, port);
+  console.log(`test: MariaDB on 127.0.0.1:${port} (data in ${instance.dataDir})`);
   await startMaria(instance);
   try {
     const databases = testDatabases();
@@ -35,11 +41,43 @@ async function main(): Promise<number> {
       await sequelize.close();
     }
     console.log(`test: migrated ${databases.join(', ')}`);
+    env.DATA_DIR = `.data/test-files-${process.pid}`;
+    process.env.DATA_DIR = env.DATA_DIR;
     rmSync(join(root, env.DATA_DIR), { recursive: true, force: true });
     buildClientIfStale(root);
     return await runVitest(process.argv.slice(2));
   } finally {
     await stopMaria(instance);
+    for (const path of [instance.dataDir, instance.logFile, instance.socket, instance.pidFile, join(root, env.DATA_DIR)]) rmSync(path, { recursive: true, force: true });
+  }
+}
+
+function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const server = createServer();
+    server.once('error', reject);
+    server.listen(0, '127.0.0.1', () => {
+      const { port } = server.address() as { port: number };
+      server.close(() => resolve(port));
+    });
+  });
+}
+
+/** Removes the data folders of test runs whose process is gone (killed before cleaning up). */
+function removeStaleTestInstances() {
+  const base = join(root, '.data');
+  if (!existsSync(base)) return;
+  for (const name of readdirSync(base)) {
+    const match = /^mariadb-test-(\d+)(\.tmp)?$/.exec(name);
+    if (!match) continue;
+    const pid = Number(match[1]);
+    let alive = true;
+    try {
+      process.kill(pid, 0);
+    } catch {
+      alive = false;
+    }
+    if (!alive) for (const suffix of ['', '.tmp', '.log', '.sock', '.pid']) rmSync(join(base, `mariadb-test-${pid}${suffix}`), { recursive: true, force: true });
   }
 }
 

@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { createHash } from 'node:crypto';
-import { existsSync, readFileSync, readdirSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, readFileSync, readdirSync, rmSync, statSync, writeFileSync } from 'node:fs';
 import { join, relative } from 'node:path';
 
 const INPUTS = ['src', 'shared', 'index.html', 'public', 'vite.config.ts', 'tailwind.config.js', 'package-lock.json'];
@@ -20,8 +20,32 @@ function fingerprint(root: string): string {
   return hash.digest('hex');
 }
 
-/** Builds the client with Vite unless dist/ was built from exactly these sources. */
+/**
+ * Builds the client with Vite unless dist/ was built from exactly these sources. A lock folder
+ * keeps two runs on one machine (npm start and npm test, say) from building over each other.
+ */
 export function buildClientIfStale(root: string, outDir = 'dist') {
+  const lock = join(root, `.${outDir.replace(/\W/g, '_')}-build.lock`);
+  const deadline = Date.now() + 180_000;
+  for (;;) {
+    try {
+      mkdirSync(lock);
+      break;
+    } catch {
+      // A lock older than three minutes belongs to a build that died.
+      if (existsSync(lock) && Date.now() - statSync(lock).mtimeMs > 180_000) rmSync(lock, { recursive: true, force: true });
+      if (Date.now() > deadline) throw new Error(`another client build holds ${lock}; remove it if no build is running`);
+      Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, 250);
+    }
+  }
+  try {
+    return buildUnlocked(root, outDir);
+  } finally {
+    rmSync(lock, { recursive: true, force: true });
+  }
+}
+
+function buildUnlocked(root: string, outDir: string) {
   const stamp = join(root, outDir, '.source-sha256');
   const wanted = fingerprint(root);
   if (existsSync(stamp) && readFileSync(stamp, 'utf8').trim() === wanted) return false;

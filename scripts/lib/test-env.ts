@@ -3,7 +3,6 @@ import { randomBytes } from 'node:crypto';
 /** How many vitest workers run at once; each gets its own database. */
 export const TEST_WORKERS = 2;
 export const TEST_DB_PREFIX = 'gelwright_test';
-export const TEST_DB_PORT = 3392;
 
 export const testDatabases = () => Array.from({ length: TEST_WORKERS }, (_, i) => `${TEST_DB_PREFIX}_${i + 1}`);
 
@@ -19,7 +18,8 @@ export function testEnvironment(): Record<string, string> {
     PORT: '4199',
     PUBLIC_URL: 'http://127.0.0.1:4199',
     DB_HOST: '127.0.0.1',
-    DB_PORT: String(TEST_DB_PORT),
+    // Replaced by scripts/test.ts with the free port of this run's own instance.
+    DB_PORT: '3392',
     DB_NAME: `${TEST_DB_PREFIX}_1`,
     DB_USER: 'gelwright_test',
     DB_PASSWORD: process.env.GELWRIGHT_TEST_DB_PASSWORD ?? randomBytes(18).toString('base64url'),
