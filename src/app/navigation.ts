@@ -11,6 +11,8 @@ export interface NavItem {
 /** The screens that exist, in the order the rail shows them. */
 export const NAV_ITEMS: NavItem[] = [
   { to: '/', label: 'Overview', capability: 'data.read', description: 'What Gelwright does for you' },
+  { to: '/map', label: 'State map', capability: 'data.read', description: 'Recipes and bench outcomes on the computed state diagram' },
+  { to: '/recipes', label: 'Recipes', capability: 'data.read', description: 'Compositions with their predicted state and margin' },
   { to: '/bench', label: 'Bench log', capability: 'data.read', description: 'Observed outcomes beside their predictions; record, import and export' },
   { to: '/shortlists', label: 'Shortlists', capability: 'data.read', description: 'Candidate recipes on their way to approval' },
   { to: '/library', label: 'Library', capability: 'data.read', description: 'Particles, depletants, solvents and salts' },

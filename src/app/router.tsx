@@ -18,6 +18,8 @@ const router = createBrowserRouter([
         errorElement: <RouteError />,
         children: [
           { index: true, lazy: () => import('./routes/overview').then((m) => ({ Component: m.OverviewRoute })) },
+          { path: 'map', lazy: () => import('./routes/map').then((m) => ({ Component: m.MapRoute })) },
+          { path: 'recipes', lazy: () => import('./routes/recipes').then((m) => ({ Component: m.RecipesRoute })) },
           { path: 'team', lazy: () => import('./routes/team').then((m) => ({ Component: m.TeamRoute })) },
           { path: 'bench', lazy: () => import('./routes/bench').then((m) => ({ Component: m.BenchRoute })) },
           { path: 'shortlists', lazy: () => import('./routes/shortlists').then((m) => ({ Component: m.ShortlistsRoute })) },

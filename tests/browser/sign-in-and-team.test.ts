@@ -16,13 +16,14 @@ afterAll(async () => {
   await stack?.close();
 });
 
-/** What the rail shows each role today (screens that exist; later issues add more). */
+/** What the rail shows each role: every screen reads data; only administrators manage the team. */
+const SHARED_SCREENS = ['Overview', 'State map', 'Recipes', 'Bench log', 'Shortlists', 'Library', 'Find'];
 const NAV_FOR: Record<(typeof ROLES)[number], string[]> = {
-  admin: ['Overview', 'Team'],
-  manager: ['Overview'],
-  formulator: ['Overview'],
-  scientist: ['Overview'],
-  viewer: ['Overview'],
+  admin: [...SHARED_SCREENS, 'Team'],
+  manager: SHARED_SCREENS,
+  formulator: SHARED_SCREENS,
+  scientist: SHARED_SCREENS,
+  viewer: SHARED_SCREENS,
 };
 
 describe('signing in as each role', () => {

@@ -4,7 +4,7 @@ import { formatNumber } from '@/lib/format';
 import type { MapPoint } from '../geometry/types';
 
 /** The card shown next to the point under the pointer. */
-export function HoverCard({ point, x, y, width, yLabel }: { point: MapPoint; x: number; y: number; width: number; yLabel: string }) {
+export function HoverCard({ point, x, y, width, yLabel, displayY }: { point: MapPoint; x: number; y: number; width: number; yLabel: string; displayY: (y: number) => number }) {
   const left = x > width - 260 ? x - 250 : x + 14;
   return (
     <div role="status" className="pointer-events-none absolute z-20 w-60 rounded-md border border-line bg-panel px-3 py-2 text-xs shadow-card" style={{ left, top: Math.max(0, y - 20) }}>
@@ -13,7 +13,7 @@ export function HoverCard({ point, x, y, width, yLabel }: { point: MapPoint; x: 
       </p>
       {point.name && <p className="mb-1 text-ink-soft">{point.name}</p>}
       <p>
-        φ {formatNumber(point.x, 3)} · {yLabel} {formatNumber(point.y, 3)}
+        φ {formatNumber(point.x, 3)} · {yLabel} {formatNumber(displayY(point.y), 3)}
       </p>
       {point.predicted && <p>Predicted: {STATE_LABELS[point.predicted]}</p>}
       {point.kind === 'observation' && (

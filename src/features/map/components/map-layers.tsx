@@ -7,6 +7,11 @@ import type { MapScales } from '../geometry/scales';
 import type { Layer } from '../geometry/map-view';
 import type { MapDrawing, MapLine, XY } from '../geometry/types';
 
+/** Colours of the shaded regions; the greyed crystal region has no state of its own. */
+const REGION_FILL = (state: StateRegion['state']) => (state === 'crystal-suppressed' ? '#e4e2dc' : STATE_STYLE[state].tint);
+const REGION_LABEL = (state: StateRegion['state']) => (state === 'crystal-suppressed' ? 'Crystal suppressed' : STATE_LABELS[state]);
+const REGION_INK = (state: StateRegion['state']) => (state === 'crystal-suppressed' ? '#5d6670' : STATE_STYLE[state].colour);
+
 const TONE: Record<MapLine['tone'], { stroke: string; width: number }> = {
   coexistence: { stroke: '#1c2630', width: 2 },
   spinodal: { stroke: '#4a5662', width: 1.4 },
@@ -54,7 +59,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
       <g clipPath={`url(#${clipId})`}>
         {layers.has('regions') &&
           regions.map((region) => (
-            <path key={region.state} d={region.rings.map((ring) => `${pathOf(ring, scales)}Z`).join(' ')} fill={STATE_STYLE[region.state].tint} fillOpacity={0.75} fillRule="evenodd" stroke="none" data-region={region.state} />
+            <path key={region.state} d={region.rings.map((ring) => `${pathOf(ring, scales)}Z`).join(' ')} fill={REGION_FILL(region.state)} fillOpacity={0.75} fillRule="evenodd" stroke="none" data-region={region.state} />
           ))}
         {layers.has('lines') &&
           drawing.lines.map((l) => (
@@ -86,8 +91,8 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
             const y = scales.y(region.labelAt[1]);
             if (x < 20 || y < 14 || x > scales.inner.width - 20 || y > scales.inner.height - 6) return null;
             return (
-              <text key={region.state} x={x} y={y} textAnchor="middle" fontSize={13} fontWeight={600} fill={STATE_STYLE[region.state].colour} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
-                {STATE_LABELS[region.state]}
+              <text key={region.state} x={x} y={y} textAnchor="middle" fontSize={13} fontWeight={600} fill={REGION_INK(region.state)} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+                {REGION_LABEL(region.state)}
               </text>
             );
           })}
@@ -105,7 +110,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
   );
 }
 
-export function MapAxes({ scales, xLabel, yLabel }: { scales: MapScales; xLabel: string; yLabel: string }) {
+export function MapAxes({ scales, xLabel, yLabel, displayY }: { scales: MapScales; xLabel: string; yLabel: string; displayY: (y: number) => number }) {
   const xTicks = scales.x.ticks(8);
   const yTicks = scales.y.ticks(7);
   return (
@@ -127,7 +132,7 @@ export function MapAxes({ scales, xLabel, yLabel }: { scales: MapScales; xLabel:
         <g key={t} transform={`translate(0,${scales.y(t)})`}>
           <line x2={-5} stroke="#7b858f" />
           <text x={-8} dy="0.32em" textAnchor="end">
-            {formatNumber(t, 3)}
+            {formatNumber(displayY(t), 3)}
           </text>
         </g>
       ))}

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button';
 import { createHitIndex } from '../geometry/hit-index';
 import type { Layer } from '../geometry/map-view';
 import { paintPoints } from '../geometry/point-painter';
-import { stateRegions } from '../geometry/regions';
+import { gridRegions } from '../geometry/regions';
 import { mapScales, type MapFrame } from '../geometry/scales';
 import type { MapDrawing, MapPoint, Viewport } from '../geometry/types';
 import { HoverCard } from './hover-card';
@@ -69,7 +69,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
   const scales = useMemo(() => mapScales(frame, view), [width, height, view.x[0], view.x[1], view.y[0], view.y[1]]);
   const baseScales = useMemo(() => mapScales(frame, full), [width, height, full.x[0], full.x[1], full.y[0], full.y[1]]);
   // Regions are traced once per drawing over the whole domain; zooming only re-projects them.
-  const regions = useMemo(() => stateRegions(drawing.classify, full), [drawing]);
+  const regions = useMemo(() => gridRegions(drawing.regionGrid, full), [drawing]);
   const hits = useMemo(() => createHitIndex(points, scales), [points, scales]);
 
   // Paint the points whenever they, the view or the selection change.
@@ -168,7 +168,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
           <title>{ariaLabel}</title>
           <g transform={`translate(${MARGIN.left},${MARGIN.top})`}>
             <MapLayers drawing={drawing} regions={regions} scales={scales} layers={layers} clipId={clipId} />
-            <MapAxes scales={scales} xLabel={drawing.xLabel} yLabel={drawing.yLabel} />
+            <MapAxes scales={scales} xLabel={drawing.xLabel} yLabel={drawing.yLabel} displayY={drawing.displayY} />
             <g data-points-layer />
           </g>
         </svg>
@@ -201,7 +201,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
           />
           <g ref={brushLayer} />
         </svg>
-        {hovered && <HoverCard point={hovered.point} x={hovered.x + MARGIN.left} y={hovered.y + MARGIN.top} width={width} yLabel={drawing.yLabel} />}
+        {hovered && <HoverCard point={hovered.point} x={hovered.x + MARGIN.left} y={hovered.y + MARGIN.top} width={width} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} />}
       </div>
     </div>
   );

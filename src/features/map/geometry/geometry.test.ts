@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { createHitIndex } from './hit-index';
 import { parseMapView, writeMapView } from './map-view';
 import { pointsToCsv } from './points-csv';
-import { stateRegions } from './regions';
+import { gridRegions, stateRegions } from './regions';
 import { clampViewport, mapScales, panViewport, zoomViewport } from './scales';
 import type { MapPoint } from './types';
 
@@ -29,6 +29,29 @@ describe('stateRegions', () => {
   it('leaves out states the classifier never returns, and unclassifiable points', () => {
     const regions = stateRegions((x, y) => (y > 5 ? null : 'gel'), { x: [0, 1], y: [0, 10] }, 50, 50);
     expect(regions.map((r) => r.state)).toEqual(['gel']);
+  });
+});
+
+describe('gridRegions', () => {
+  it("traces a physics grid whose cell centres span the domain, row 0 at the bottom", () => {
+    // 101 × 51 cells: fluid where the centre has x < 0.3, gel above y = 6 elsewhere, glass below.
+    const columns = 101;
+    const rows = 51;
+    const cells: number[] = [];
+    for (let j = 0; j < rows; j++) for (let i = 0; i < columns; i++) cells.push(i / (columns - 1) < 0.3 / 0.74 ? 0 : (j / (rows - 1)) * 10 > 6 ? 1 : 2);
+    const full = { x: [0, 0.74] as [number, number], y: [0, 10] as [number, number] };
+    const regions = gridRegions({ columns, rows, codes: ['fluid', 'gel', 'glass'], cells }, full);
+    const area = (state: string) => regions.find((r) => r.state === state)!.rings.reduce((sum, ring) => sum + ringArea(ring), 0);
+    const cellArea = (0.74 / (columns - 1)) * (10 / (rows - 1));
+    // Unsmoothed marching squares follow cell edges but cut each convex corner by 1/8 cell, so a
+    // region's area is its cell count × one cell, less half a cell for a rectangle (shoelace
+    // formula); the outer cells reach half a cell past the domain, as their centres sit on it.
+    for (const [code, state] of ['fluid', 'gel', 'glass'].entries()) {
+      expect(Math.abs(area(state) - cells.filter((c) => c === code).length * cellArea)).toBeLessThanOrEqual(0.5 * cellArea + 1e-12);
+    }
+    expect(area('fluid')).toBeCloseTo(3.0, 0);
+    expect(regions.find((r) => r.state === 'gel')!.labelAt![1]).toBeGreaterThan(6);
+    expect(regions.find((r) => r.state === 'glass')!.labelAt![1]).toBeLessThan(6);
   });
 });
 

@@ -1,9 +1,9 @@
 import { contours } from 'd3-contour';
 import { PREDICTED_STATES, type PredictedState } from '@shared/states';
-import type { Viewport, XY } from './types';
+import type { RegionGrid, RegionState, Viewport, XY } from './types';
 
 export interface StateRegion {
-  state: PredictedState;
+  state: RegionState;
   /** Polygons (rings) in map coordinates, ready for a d3 line or an SVG path. */
   rings: XY[][];
   /** Where to put the region's name: the centre of its largest ring. */
@@ -45,4 +45,30 @@ function largestRingCentre(outers: XY[][]): XY | null {
   if (!best || best.length === 0) return null;
   const sum = best.reduce((acc, [x, y]) => [acc[0] + x, acc[1] + y] as XY, [0, 0] as XY);
   return [sum[0] / best.length, sum[1] / best.length];
+}
+
+/**
+ * Shades the map from the physics map's own state grid: for each state present, d3-contour
+ * traces the outline of its cells. Cell centres span the full domain uniformly; grid row 0 is
+ * the bottom of the map (weakest attraction).
+ */
+export function gridRegions(grid: RegionGrid, full: Viewport): StateRegion[] {
+  const { columns, rows } = grid;
+  // d3-contour's row 0 is the top of its picture, so flip the grid's rows.
+  const flipped = (code: number) => {
+    const field = new Array<number>(columns * rows);
+    for (let j = 0; j < rows; j++) for (let i = 0; i < columns; i++) field[(rows - 1 - j) * columns + i] = grid.cells[j * columns + i] === code ? 1 : 0;
+    return field;
+  };
+  const generator = contours().size([columns, rows]).thresholds([0.5]).smooth(false);
+  // Cell centres span the domain (centre i at i/(n−1) of it); contour cell i spans [i, i+1].
+  const toMap = ([gx, gy]: number[]): XY => [full.x[0] + ((gx - 0.5) / (columns - 1)) * (full.x[1] - full.x[0]), full.y[1] - ((gy - 0.5) / (rows - 1)) * (full.y[1] - full.y[0])];
+  const regions: StateRegion[] = [];
+  grid.codes.forEach((state, code) => {
+    if (!grid.cells.includes(code)) return;
+    const [shape] = generator(flipped(code));
+    const rings = shape.coordinates.flatMap((polygon) => polygon.map((ring) => ring.map(toMap)));
+    regions.push({ state, rings, labelAt: largestRingCentre(shape.coordinates.map((polygon) => polygon[0].map(toMap))) });
+  });
+  return regions;
 }

@@ -32,8 +32,19 @@ export interface MapDrawing {
   lines: MapLine[];
   markers: MapMarker[];
   notes: string[];
-  /** Predicts the state at a point of the map, for shading regions. */
-  classify: (x: number, y: number) => PredictedState | null;
+  /** The shading grid: a state code per cell, row 0 at the bottom (weakest attraction). */
+  regionGrid: RegionGrid;
+  /** The value shown for a drawn y (the drawing flips axes where larger values are drawn lower). */
+  displayY: (y: number) => number;
+}
+
+export type RegionState = PredictedState | 'crystal-suppressed';
+
+export interface RegionGrid {
+  columns: number;
+  rows: number;
+  codes: RegionState[];
+  cells: number[];
 }
 
 /** A recipe or an observation placed on the map. */

@@ -1,0 +1,134 @@
+import { useCallback, useMemo, useRef, useState } from 'react';
+import { useNavigate, useSearchParams } from 'react-router-dom';
+import { can } from '@shared/permissions';
+import { Card, PageHeader } from '@/components/ui/page';
+import { Notice } from '@/components/ui/notice';
+import { ErrorState, Loading } from '@/components/ui/states';
+import { useSession } from '@/features/auth/api/get-session';
+import { SafetyNote } from '@/features/cautions/safety-note';
+import { useMapPoints } from '@/features/map/api/get-map-points';
+import { MapControls } from '@/features/map/components/map-controls';
+import { MapExports } from '@/features/map/components/map-exports';
+import { MapLegend } from '@/features/map/components/map-legend';
+import { SelectionPanel } from '@/features/map/components/selection-panel';
+import { StateMap } from '@/features/map/components/state-map';
+import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '@/features/map/geometry/map-view';
+import type { MapPoint, Viewport } from '@/features/map/geometry/types';
+import { placePoints, useStateMapDrawing } from '@/features/map/hooks/use-map-drawing';
+import { ProgrammeGate } from '@/features/programmes/components/programme-gate';
+import { ProgrammePicker } from '@/features/programmes/components/programme-picker';
+import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
+import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
+
+function median(values: number[]) {
+  if (values.length === 0) return null;
+  const sorted = values.slice().sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)];
+}
+
+export function MapRoute() {
+  const { data: user } = useSession();
+  const selection = useProgrammeParam();
+  return (
+    <>
+      <PageHeader
+        title="State map"
+        subtitle="Where the programme's recipes sit on the state diagram computed from published theory, with what the bench observed laid over it."
+      />
+      <div className="mb-4">
+        <ProgrammePicker programmes={selection.programmes} value={selection.programmeId} onChange={selection.setProgrammeId} />
+      </div>
+      <ProgrammeGate selection={selection} canCreate={can(user?.role, 'programmes.write')}>
+        {(programme) => <ProgrammeMap programme={programme} canShortlist={can(user?.role, 'shortlists.write')} />}
+      </ProgrammeGate>
+    </>
+  );
+}
+
+function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; canShortlist: boolean }) {
+  const points = useMapPoints(programme.id);
+  if (points.isPending) return <Loading label="Loading the programme's points…" />;
+  if (points.isError) return <ErrorState error={points.error} retry={() => points.refetch()} />;
+  return <MapScreen programme={programme} data={points.data} canShortlist={canShortlist} />;
+}
+
+function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean }) {
+  const [params, setParams] = useSearchParams();
+  const navigate = useNavigate();
+  const sizeRatio = useMemo(() => {
+    const column = data.recipes.columns.indexOf('sizeRatio');
+    return median(data.recipes.rows.map((r) => r[column]).filter((v): v is number => typeof v === 'number' && v > 0));
+  }, [data]);
+  const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
+  const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');
+  const setView = useCallback(
+    (next: MapView) => setParams((previous) => writeMapView(previous, next), { replace: true }),
+    [setParams],
+  );
+  const built = useStateMapDrawing({ view, sizeRatio });
+  const [selected, setSelected] = useState<MapPoint[]>([]);
+  const svgRef = useRef<SVGSVGElement>(null);
+  const canvasRef = useRef<HTMLCanvasElement>(null);
+  const placed = useMemo(() => (built.map ? placePoints(built.map, data, { minAge: view.minAge, maxAge: view.maxAge }) : { points: [], skipped: 0 }), [built.map, data, view.minAge, view.maxAge]);
+  const visible = useMemo(
+    () => placed.points.filter((p) => (p.kind === 'recipe' ? view.layers.has('recipes') : view.layers.has('observations'))),
+    [placed.points, view.layers],
+  );
+  const selectedKeys = useMemo(() => new Set(selected.map((p) => p.key)), [selected]);
+  // Zoom events arrive many per second: update from the latest URL, not this render's view.
+  const onZoomChange = useCallback(
+    (zoom: Viewport | null) => setParams((previous) => writeMapView(previous, { ...parseMapView(previous, depletion ? 'polymerReservoir' : 'b2'), zoom }), { replace: true }),
+    [setParams, depletion],
+  );
+  const onOpen = useCallback((p: MapPoint) => p.code && navigate(`/recipes/${p.code}`), [navigate]);
+
+  if (!built.map) return <Notice tone="error" title="The map could not be computed">{built.error.message}</Notice>;
+  const drawing = built.drawing;
+  const recipes = placed.points.filter((p) => p.kind === 'recipe').length;
+  const observations = placed.points.length - recipes;
+  const mismatches = placed.points.filter((p) => p.agrees === false).length;
+  const toggle = (layer: Layer) => {
+    const layers = new Set(view.layers);
+    if (layers.has(layer)) layers.delete(layer);
+    else layers.add(layer);
+    setView({ ...view, layers });
+  };
+  return (
+    <div className="flex flex-col gap-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <MapControls view={view} onChange={setView} depletion={depletion} />
+        <MapExports svg={svgRef.current} canvas={canvasRef.current} points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} fileStem={`gelwright-${programme.codePrefix.toLowerCase()}-map`} />
+      </div>
+      <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_18rem]">
+        <Card>
+          <StateMap
+            drawing={drawing}
+            points={visible}
+            layers={view.layers}
+            zoom={view.zoom}
+            onZoomChange={onZoomChange}
+            selected={selectedKeys}
+            onSelect={setSelected}
+            onOpen={onOpen}
+            svgRef={svgRef}
+            canvasRef={canvasRef}
+            ariaLabel={`State map of ${programme.name}: ${drawing.modelLabel}; ${recipes} recipes and ${observations} observations, ${mismatches} differing from the prediction`}
+          />
+          <p className="mt-3 text-xs text-ink-soft" data-testid="map-model-note">
+            Lines are approximate: {drawing.modelLabel}. {drawing.notes.join(' ')}
+            {placed.skipped > 0 ? ` ${placed.skipped} point${placed.skipped === 1 ? ' has' : 's have'} no coordinate on this axis and ${placed.skipped === 1 ? 'is' : 'are'} not shown.` : ''}
+          </p>
+        </Card>
+        <div className="flex flex-col gap-5">
+          <Card title="Layers and key">
+            <MapLegend layers={view.layers} onToggle={toggle} available={LAYERS.filter((l) => l !== 'calibrated')} />
+          </Card>
+          <Card title="Selection">
+            <SelectionPanel points={selected} programmeId={programme.id} goalState={programme.goalState} canShortlist={canShortlist} onClear={() => setSelected([])} />
+          </Card>
+        </div>
+      </div>
+      <SafetyNote compact />
+    </div>
+  );
+}

@@ -1,0 +1,49 @@
+import type { MapBoundary, StateMap } from '@shared/physics/map/types';
+import type { MapDrawing, MapLine, XY } from './types';
+
+const TONE_OF: Record<MapBoundary['id'], MapLine['tone']> = {
+  binodal: 'coexistence',
+  spinodal: 'spinodal',
+  freezing: 'crystal',
+  melting: 'crystal',
+  percolation: 'percolation',
+  'repulsive-glass': 'glass',
+  'attractive-glass': 'glass',
+  gel: 'gel',
+};
+
+/**
+ * Turns a physics state map into what the figure draws. Axes on which larger values are drawn
+ * lower (B2*) are flipped (ŷ = −y) so that every drawing has attraction growing upward on an
+ * ascending axis; `displayY` turns ŷ back into the value people read.
+ */
+export function drawingFromStateMap(map: StateMap): MapDrawing {
+  const sign = map.y.inverted ? -1 : 1;
+  const flip = ([x, y]: XY): XY => [x, sign * y];
+  const yDomain: XY = [Math.min(sign * map.y.weakest, sign * map.y.strongest), Math.max(sign * map.y.weakest, sign * map.y.strongest)];
+  const unit = map.y.unit ? ` (${map.y.unit})` : '';
+  return {
+    xDomain: [map.x.domain[0], map.x.domain[1]],
+    yDomain,
+    xLabel: `Volume fraction ${map.x.label}`,
+    yLabel: `${map.y.label}${unit} — ${map.y.quantity}${map.y.inverted ? ', more negative is stickier' : ''}`,
+    modelLabel: map.modelName,
+    lines: map.boundaries.map((b, index) => ({
+      id: `${b.id}-${index}`,
+      label: b.label,
+      points: b.points.map(flip),
+      dashed: b.metastable,
+      approximate: b.approximate,
+      tone: TONE_OF[b.id],
+    })),
+    markers: map.markers.map((m) => ({ id: m.id, label: m.label, x: m.x, y: sign * m.y, reference: m.id === 'simulation-critical-point' })),
+    notes: map.notes,
+    regionGrid: map.regions,
+    displayY: (y) => sign * y,
+  };
+}
+
+/** The drawn ŷ of a value on the map's own y axis (B2* is flipped). */
+export function drawnY(map: StateMap, y: number) {
+  return map.y.inverted ? -y : y;
+}
