@@ -6,7 +6,7 @@ import { requireInRange } from '../validation/require-in-range';
 import { buildAxis, depletionPolymerForB2, genericB2FromY, genericYFromB2 } from './build-axis';
 import { resolveClassifierParameters } from './classifier-parameters';
 import { curveAt } from './state-rule';
-import { buildDrawnCurves, type DrawnCurve } from './drawn-curves';
+import { buildDrawnCurves, roundPoint, type DrawnCurve } from './drawn-curves';
 import { genericLevelPhysics, depletionLevelPhysics } from './level-physics';
 import { createMapFrame, type MapFrame, type ReducedB2Table } from './map-frame';
 import { stateAtDrawnPoint } from './map-state-at';
@@ -126,7 +126,7 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
     x: { label: 'φ', quantity: 'particle volume fraction', unit: '', domain: [0, FCC_CLOSE_PACKING], inverted: false, weakest: 0, strongest: FCC_CLOSE_PACKING },
     y: axis,
     boundaries: drawnBoundaries(curves, tables, theory, drawn),
-    markers: buildMarkers(resolved, traced, theory, drawn, names),
+    markers: buildMarkers(traced, drawn, names),
     regions: buildRegions(tables, theory, drawn, parameters, crystalSuppressed, columns, rows),
     notes: buildNotes(resolved, traced, theory, parameters, polydispersity, crystalSuppressed),
     tables,
@@ -234,13 +234,13 @@ function drawnBoundaries(curves: DrawnCurve[], tables: ClassifierTables, theory:
           }
         : () => false;
     for (const run of splitByFlag(curve.points, metastableTest)) {
-      boundaries.push({ id: curve.id, label: curve.label, points: run.points.map((point): MapPoint => [point[0], point[1]]), metastable: run.flag, approximate });
+      boundaries.push({ id: curve.id, label: curve.label, points: run.points.map(roundPoint), metastable: run.flag, approximate });
     }
   }
   return boundaries;
 }
 
-function buildMarkers(model: MapModel, traced: TheoryCurves, theory: MapFrame, drawn: MapFrame, names: { critical: string }): MapMarker[] {
+function buildMarkers(traced: TheoryCurves, drawn: MapFrame, names: { critical: string }): MapMarker[] {
   const markers: MapMarker[] = [];
   if (traced.binodal) {
     markers.push({ id: 'critical-point', label: names.critical, x: traced.binodal.left.phi[0], y: drawn.drawnYFromTheoryU(traced.binodal.bottom) });
@@ -262,8 +262,6 @@ function buildMarkers(model: MapModel, traced: TheoryCurves, theory: MapFrame, d
       y: drawn.drawnYFromTheoryU(t.u),
     });
   }
-  void theory;
-  void model;
   return markers;
 }
 

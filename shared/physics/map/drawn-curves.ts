@@ -8,6 +8,17 @@ import { baxterPercolationStickiness } from '../fluid-fluid/baxter-percolation-s
 
 export type DrawnCurve = ClassifierTables['curves'][number];
 
+/** 10 significant digits: ample for drawing and distances, half the JSON of full doubles. */
+function roundSignificant(value: number): number {
+  if (value === 0 || !Number.isFinite(value)) return value;
+  const scale = 10 ** (9 - Math.floor(Math.log10(Math.abs(value))));
+  return Math.round(value * scale) / scale;
+}
+
+export function roundPoint(point: MapPoint): MapPoint {
+  return [roundSignificant(point[0]), roundSignificant(point[1])];
+}
+
 /**
  * Every boundary as a polyline in map units (drawn frame: the attraction shift applied), clipped
  * to the y domain. Internal.
@@ -24,7 +35,7 @@ export function buildDrawnCurves(
   const toPoint = (phi: number, u0: number): MapPoint => [phi, drawn.drawnYFromTheoryU(u0)];
   const add = (id: BoundaryId, label: string, shape: DrawnCurve['shape'], points: MapPoint[]) => {
     for (const inY of clipPolyline(points, (point) => drawn.uFromY(point[1]), 0, 1)) {
-      for (const run of clipPolyline(inY, (point) => point[0], 0, FCC_CLOSE_PACKING)) curves.push({ id, label, shape, points: run });
+      for (const run of clipPolyline(inY, (point) => point[0], 0, FCC_CLOSE_PACKING)) curves.push({ id, label, shape, points: run.map(roundPoint) });
     }
   };
   const domePoints = (dome: DomeCurve): MapPoint[] => {
