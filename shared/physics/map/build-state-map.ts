@@ -1,5 +1,6 @@
 import { asakuraOosawaReducedB2 } from '../attraction/asakura-oosawa-reduced-b2';
 import { freeVolumeCriticalEndpoint } from '../depletion/free-volume-critical-endpoint';
+import { freeVolumeCriticalPoint } from '../depletion/free-volume-critical-point';
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireInRange } from '../validation/require-in-range';
@@ -307,6 +308,9 @@ function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, par
       ? `q above the critical endpoint (${endpoint.toFixed(4)}): a stable gas–liquid region exists up to the triple point.`
       : `q below the critical endpoint (${endpoint.toFixed(4)}): the gas–liquid binodal is metastable inside fluid–crystal coexistence and is drawn dashed.`);
     if (model.q > 0.6) notes.push('Size ratios above about 0.6 stretch the ideal-polymer, free-volume description; treat the lines as indicative.');
+    const critical = freeVolumeCriticalPoint(model.q);
+    if (critical.polymerReservoir > theory.axis.strongest) notes.push(`The gas–liquid critical point (φ_p^R = ${critical.polymerReservoir.toFixed(3)}) lies above the top of this map: no fluid–fluid lines are drawn.`);
+    else if (critical.phi > 0.6) notes.push(`The gas–liquid critical point lies at φ = ${critical.phi.toFixed(3)}, inside the glass: its binodal is mostly hidden behind the glass line.`);
   }
   notes.push(`Glass lines: repulsive glass at φ = ${parameters.glassPhi}; the attractive-glass line and the gel threshold (B2* = ${parameters.gelB2Threshold}) are approximate placeholders for calibration.`);
   if (parameters.attractionShift !== 0) notes.push(`Attraction scale shifted by ${parameters.attractionShift} in B2* (calibration): every theory boundary is drawn at B2* + ${parameters.attractionShift}.`);
