@@ -85,8 +85,8 @@ const CODE_OF_CAUSE: Record<StateCause, number> = {
 export function buildStateMap(model: MapModel, options: StateMapOptions = {}): StateMap {
   const resolved = resolveMapModel(model);
   const levels = requireInteger('options.levels', options.levels ?? 200, 20, 2000);
-  const columns = requireInteger('options.gridColumns', options.gridColumns ?? 160, 10, 1000);
-  const rows = requireInteger('options.gridRows', options.gridRows ?? 100, 10, 1000);
+  const columns = requireInteger('options.gridColumns', options.gridColumns ?? 128, 10, 1000);
+  const rows = requireInteger('options.gridRows', options.gridRows ?? 96, 10, 1000);
   const parameters = resolveClassifierParameters(options.parameters);
   const polydispersity = options.polydispersity === undefined ? null : requireInRange('options.polydispersity', options.polydispersity, 0, 100, { what: 'a size polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
   const crystalSuppressed = polydispersity !== null && polydispersity > parameters.polydispersityCrystalThreshold;

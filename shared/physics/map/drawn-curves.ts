@@ -8,15 +8,16 @@ import { baxterPercolationStickiness } from '../fluid-fluid/baxter-percolation-s
 
 export type DrawnCurve = ClassifierTables['curves'][number];
 
-/** 10 significant digits: ample for drawing and distances, half the JSON of full doubles. */
-function roundSignificant(value: number): number {
-  if (value === 0 || !Number.isFinite(value)) return value;
-  const scale = 10 ** (9 - Math.floor(Math.log10(Math.abs(value))));
-  return Math.round(value * scale) / scale;
+/**
+ * Coordinates rounded to 1e-10 (absolute): far below anything drawn or measured on a map whose
+ * axes span ≥ 0.3 units, and half the JSON of full doubles.
+ */
+function round10(value: number): number {
+  return Math.round(value * 1e10) / 1e10;
 }
 
 export function roundPoint(point: MapPoint): MapPoint {
-  return [roundSignificant(point[0]), roundSignificant(point[1])];
+  return [round10(point[0]), round10(point[1])];
 }
 
 /**

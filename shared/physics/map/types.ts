@@ -151,7 +151,7 @@ export interface StateMapOptions {
   polydispersity?: number;
   /** Top of the y axis in its own unit (strongest attraction); default from B2* = −10. */
   yMax?: number;
-  /** Region grid (default 160 × 100). */
+  /** Region grid (default 128 columns × 96 rows). */
   gridColumns?: number;
   gridRows?: number;
 }
