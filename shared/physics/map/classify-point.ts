@@ -9,8 +9,17 @@ import { nearestActiveSegment, segmentIndexOf } from './segment-index';
 import { decideCause, emptyRow, stateOfCause } from './state-rule';
 import type { AttractionInput, ClassifierParameters, StateMap } from './types';
 
-// Read once: imported bindings may be accessors under some loaders, and this runs per point.
+// Imported bindings read once: under some loaders (tsx) each read of an import is an accessor
+// call, and everything below runs per point.
 const CLOSE_PACKING = FCC_CLOSE_PACKING;
+const frames = framesOfMap;
+const placeAttraction = attractionOnMap;
+const decide = decideCause;
+const indexOf = segmentIndexOf;
+const nearestTo = nearestActiveSegment;
+const stateOf = stateOfCause;
+const Classification = PointClassification;
+const checkVolumeFraction = requireVolumeFraction;
 
 /**
  * Predicted state of a composition on a prebuilt map, its nearest state-changing boundary and
@@ -40,25 +49,26 @@ const CLOSE_PACKING = FCC_CLOSE_PACKING;
  * @example classifyPoint(map, { phi: 0.2, attraction: { kind: 'b2', value: -4 } }).state // 'gel'
  */
 export function classifyPoint(map: StateMap, point: { phi: number; attraction: AttractionInput }, parameters?: Partial<ClassifierParameters>): PointClassification {
-  const { theory, drawn } = framesOfMap(map);
+  const context = frames(map);
+  const { theory, drawn } = context;
   if (point === null || typeof point !== 'object') throw new PhysicsArgumentError('point', '{ phi, attraction }', point);
-  const phi = requireVolumeFraction('phi', point.phi);
+  const phi = point.phi > 0 && point.phi < CLOSE_PACKING ? point.phi : checkVolumeFraction('phi', point.phi);
   const used = parameters ? resolveClassifierParameters({ ...map.parameters, ...parameters }) : map.parameters;
   const crystalSuppressed = map.polydispersity !== null && map.polydispersity > used.polydispersityCrystalThreshold;
-  const { b2, y } = attractionOnMap(map, drawn, point.attraction);
+  const { b2, y } = placeAttraction(map, drawn, point.attraction, placed);
   const effectiveB2 = b2 - used.attractionShift;
   // Theory-frame level, and the drawn position (the map's lines carry the map's own shift).
   const u0 = used.attractionShift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(effectiveB2));
   const yDrawn = used.attractionShift === map.parameters.attractionShift ? y : drawn.yFromB2(effectiveB2 + map.parameters.attractionShift);
-  const cause = decideCause(map.tables, used, crystalSuppressed, phi, u0, effectiveB2, row);
+  const cause = decide(map.tables, used, crystalSuppressed, phi, u0, effectiveB2, row);
 
-  const index = segmentIndexOf(map);
-  const nearest = nearestActiveSegment(index, phi / CLOSE_PACKING, drawn.uFromY(yDrawn));
+  const index = context.index ?? (context.index = indexOf(map));
+  const nearest = nearestTo(index, phi / CLOSE_PACKING, drawn.uFromY(yDrawn));
   if (nearest === null) {
-    return new PointClassification(stateOfCause(cause), NO_BOUNDARY, 1, cause, row, phi, used, map.polydispersity, map.y.label, NaN, NaN);
+    return new Classification(stateOf(cause), NO_BOUNDARY, 1, cause, row, phi, used, map.polydispersity, map.y.label, NaN, NaN);
   }
-  return new PointClassification(
-    stateOfCause(cause),
+  return new Classification(
+    stateOf(cause),
     index.boundaries[nearest.curveIndex],
     nearest.distance,
     cause,
@@ -72,7 +82,8 @@ export function classifyPoint(map: StateMap, point: { phi: number; attraction: A
   );
 }
 
-/** Scratch thresholds of the rule (copied into each result). */
+/** Scratch thresholds of the rule (copied into each result) and scratch placement. */
 const row = emptyRow();
+const placed = { b2: 0, y: 0 };
 
 const NO_BOUNDARY = Object.freeze({ id: 'binodal' as const, label: 'none' });

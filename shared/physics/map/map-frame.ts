@@ -30,6 +30,10 @@ export interface ReducedB2Table {
   b2: number[];
 }
 
+// Imported bindings read once: the classifier calls these conversions per point.
+const b2FromGenericY = genericB2FromY;
+const genericYFromReducedB2 = genericYFromB2;
+
 export function createMapFrame(model: MapModel, axis: MapAxis, shift: number, table?: ReducedB2Table): MapFrame {
   const span = axis.strongest - axis.weakest;
   const uFromY = (y: number) => (y - axis.weakest) / span;
@@ -37,8 +41,8 @@ export function createMapFrame(model: MapModel, axis: MapAxis, shift: number, ta
   let b2FromY: (y: number) => number;
   let yFromB2: (b2: number) => number;
   if (model.kind === 'generic') {
-    b2FromY = (y) => genericB2FromY(model, y);
-    yFromB2 = (b2) => genericYFromB2(model, b2);
+    b2FromY = (y) => b2FromGenericY(model, y);
+    yFromB2 = (b2) => genericYFromReducedB2(model, b2);
   } else {
     if (!table) throw new Error('createMapFrame: a depletion map needs its B2* table');
     const q = model.q;

@@ -16,9 +16,13 @@ export interface SegmentIndex {
   /** All segments, flattened [ax, au, bx, bu, …], and the curve each belongs to. */
   coordinates: Float64Array;
   curveOf: Int32Array;
-  /** Per cell: [ax, au, bx, bu, distance from the centre] per candidate, and their curves. */
-  cellSegments: Float64Array[];
-  cellCurves: Int32Array[];
+  /**
+   * All cells' candidates in one flat array, cell after cell: [ax, au, bx, bu, distance from the
+   * cell centre] per candidate; cell i owns candidates cellStart[i] … cellStart[i + 1] − 1.
+   */
+  cellSegments: Float64Array;
+  cellCurves: Int32Array;
+  cellStart: Int32Array;
   /** Frozen { id, label } of each curve, shared by every classification. */
   boundaries: ReadonlyArray<Readonly<{ id: BoundaryId; label: string }>>;
 }
@@ -42,8 +46,9 @@ export function segmentIndexOf(map: StateMap): SegmentIndex {
   const { coordinates, curveOf } = activeSegmentsOf(map);
   const count = curveOf.length;
   const halfDiagonal = Math.SQRT1_2 / GRID;
-  const cellSegments: Float64Array[] = [];
-  const cellCurves: Int32Array[] = [];
+  const packedSegments: number[] = [];
+  const packedCurves: number[] = [];
+  const cellStart = new Int32Array(GRID * GRID + 1);
   const fromCentre2 = new Float64Array(count);
   for (let cu = 0; cu < GRID; cu++) {
     for (let cx = 0; cx < GRID; cx++) {
@@ -60,13 +65,11 @@ export function segmentIndexOf(map: StateMap): SegmentIndex {
       const order: number[] = [];
       for (let s = 0; s < count; s++) if (fromCentre2[s] <= limit * limit) order.push(s);
       order.sort((a, b) => fromCentre2[a] - fromCentre2[b]);
-      const packed = new Float64Array(5 * order.length);
-      order.forEach((s, k) => {
-        packed.set(coordinates.subarray(4 * s, 4 * s + 4), 5 * k);
-        packed[5 * k + 4] = Math.sqrt(fromCentre2[s]);
-      });
-      cellSegments.push(packed);
-      cellCurves.push(Int32Array.from(order, (s) => curveOf[s]));
+      for (const s of order) {
+        packedSegments.push(coordinates[4 * s], coordinates[4 * s + 1], coordinates[4 * s + 2], coordinates[4 * s + 3], Math.sqrt(fromCentre2[s]));
+        packedCurves.push(curveOf[s]);
+      }
+      cellStart[cu * GRID + cx + 1] = packedCurves.length;
     }
   }
   const index: SegmentIndex = {
@@ -74,8 +77,9 @@ export function segmentIndexOf(map: StateMap): SegmentIndex {
     halfDiagonal,
     coordinates,
     curveOf,
-    cellSegments,
-    cellCurves,
+    cellSegments: Float64Array.from(packedSegments),
+    cellCurves: Int32Array.from(packedCurves),
+    cellStart,
     boundaries: map.tables.curves.map((curve) => Object.freeze({ id: curve.id, label: curve.label })),
   };
   cache.set(map, index);
@@ -93,15 +97,21 @@ const scratch: NearestSegment = { distance: 0, curveIndex: -1, x: 0, u: 0 };
 export function nearestActiveSegment(index: SegmentIndex, x: number, u: number): NearestSegment | null {
   let segments: Float64Array;
   let curves: Int32Array;
+  let first: number;
+  let end: number;
   let stride: number;
   if (x >= 0 && x < 1 && u >= 0 && u < 1) {
     const cell = Math.floor(u * index.size) * index.size + Math.floor(x * index.size);
-    segments = index.cellSegments[cell];
-    curves = index.cellCurves[cell];
+    segments = index.cellSegments;
+    curves = index.cellCurves;
+    first = index.cellStart[cell];
+    end = index.cellStart[cell + 1];
     stride = 5;
   } else {
     segments = index.coordinates;
     curves = index.curveOf;
+    first = 0;
+    end = curves.length;
     stride = 4;
   }
   const h = index.halfDiagonal;
@@ -110,7 +120,9 @@ export function nearestActiveSegment(index: SegmentIndex, x: number, u: number):
   let found = -1;
   let bestX = 0;
   let bestU = 0;
-  for (let k = 0, o = 0; k < curves.length; k++, o += stride) {
+  for (let k = first; k < end; k++) {
+    const o = k * stride;
+    // dist(point, s) ≥ dist(centre, s) − h, and a cell's list is sorted by dist(centre, s).
     if (stride === 5 && segments[o + 4] - h > best) break;
     const ax = segments[o];
     const au = segments[o + 1];

@@ -5,21 +5,24 @@ import type { ClassifierParameters, ClassifierTables, DomeCurve, LevelCurve, Pre
 // the classifier's hot loop).
 
 /**
- * φ on a level curve at normalised attraction u, by binary search and linear interpolation;
- * clamped to the end values outside the curve's range. Internal.
+ * φ on a level curve at normalised attraction u, by linear interpolation (the interval found from
+ * the nearly uniform level spacing, then adjusted); clamped to the end values outside the curve's
+ * range. Internal.
  */
 export function curveAt(curve: LevelCurve, u: number): number {
   const us = curve.u;
   const n = us.length;
   if (n === 0) return NaN;
-  if (u <= us[0]) return curve.phi[0];
-  if (u >= us[n - 1]) return curve.phi[n - 1];
-  let low = 0;
-  let high = n - 1;
-  while (high - low > 1) {
-    const middle = (low + high) >> 1;
-    if (us[middle] <= u) low = middle; else high = middle;
-  }
+  const first = us[0];
+  const last = us[n - 1];
+  if (u <= first) return curve.phi[0];
+  if (u >= last) return curve.phi[n - 1];
+  // The levels are (nearly) uniform: guess the interval, then step to it (usually 0–1 steps).
+  let low = Math.floor(((u - first) / (last - first)) * (n - 1));
+  if (low > n - 2) low = n - 2;
+  while (low > 0 && us[low] > u) low--;
+  while (low < n - 2 && us[low + 1] <= u) low++;
+  const high = low + 1;
   const span = us[high] - us[low];
   const t = span > 0 ? (u - us[low]) / span : 0;
   return curve.phi[low] + t * (curve.phi[high] - curve.phi[low]);
