@@ -27,15 +27,16 @@ const checkVolumeFraction = requireVolumeFraction;
  *
  * Steps: the attraction (any AttractionInput) becomes B2* and the map's y; the effective
  * B2*_eff = B2* − attractionShift fixes the theory-frame level u₀; the rule (see causeOnRow) is
- * applied with the map's precomputed tables (binary search and linear interpolation — no
+ * applied with the map's precomputed tables (interval lookup and linear interpolation — no
  * coexistence is solved per point).
  *
  * Margin: the Euclidean distance, in normalised map coordinates (x = φ/φ_cp, u = (y − y.weakest)/
  * (y.strongest − y.weakest), so the whole map is a unit square), from the point to the nearest
  * boundary segment across which the predicted state changes (lines that do not change the state
  * there, such as percolation, are skipped). The boundaries are indexed after Douglas–Peucker
- * simplification to 1e-5, so the margin is exact to 1e-5 of the map's size. `marginDescription` also gives Δφ and
- * Δy (map units) from the point to that boundary point. Points off the map are allowed.
+ * simplification to 1e-4, so the margin is exact to 1e-4 of the map's size. `marginDescription`
+ * also gives Δφ and Δy (map units) from the point to that boundary point. Points off the map are
+ * allowed (their margin can exceed 1).
  *
  * The result's `reason` and `marginDescription` are computed on first read; see
  * PointClassification (use `toJSON()` for a plain copy).

@@ -46,8 +46,11 @@ export function createMapFrame(model: MapModel, axis: MapAxis, shift: number, ta
   } else {
     if (!table) throw new Error('createMapFrame: a depletion map needs its B2* table');
     const q = model.q;
-    b2FromY = (y) => depletionB2FromY(table, uFromY(y), y, q, yFromU);
-    yFromB2 = (b2) => depletionYFromB2(table, b2, yFromU, q);
+    // The spline coefficients, computed on first use and kept with this frame.
+    let g: Float64Array | null = null;
+    const spline = () => (g ??= smoothLogGap(table, q, yFromU));
+    b2FromY = (y) => depletionB2FromY(table, uFromY(y), y, q, spline());
+    yFromB2 = (b2) => depletionYFromB2(table, b2, yFromU, q, spline());
   }
   const drawnYFromTheoryU = shift === 0 ? yFromU : (u0: number) => yFromB2(b2FromY(yFromU(u0)) + shift);
   return { model, axis, shift, uFromY, yFromU, b2FromY, yFromB2, drawnYFromTheoryU };
@@ -64,11 +67,7 @@ export function xFromPhi(phi: number): number {
 // cubic Hermite splines with central-difference slopes (Catmull–Rom), relative error in 1 − B2*
 // ≲ 2e-8 on
 // 200 levels; the inverse solves the cubic of its interval by bisection.
-const smoothTables = new WeakMap<ReducedB2Table, Float64Array>();
-
 function smoothLogGap(table: ReducedB2Table, q: number, yFromU: (u: number) => number): Float64Array {
-  const cached = smoothTables.get(table);
-  if (cached) return cached;
   const n = table.u.length;
   const g = new Float64Array(n);
   for (let i = 1; i < n; i++) g[i] = Math.log(1 - table.b2[i]) - Math.log(table.u[i]);
@@ -77,7 +76,6 @@ function smoothLogGap(table: ReducedB2Table, q: number, yFromU: (u: number) => n
   const s = 1 + q;
   const overlap = (s / q) ** 3 * ((s ** 3 - 1) / 3 - (3 / (2 * s)) * ((s ** 4 - 1) / 4) + (s ** 6 - 1) / (12 * s ** 3));
   g[0] = Math.log(3 * overlap * (yFromU(1) - yFromU(0)));
-  smoothTables.set(table, g);
   return g;
 }
 
@@ -93,18 +91,17 @@ function hermite(g: Float64Array, i: number, t: number): number {
   return (2 * t3 - 3 * t2 + 1) * g0 + (t3 - 2 * t2 + t) * m0 + (-2 * t3 + 3 * t2) * g1 + (t3 - t2) * m1;
 }
 
-function depletionB2FromY(table: ReducedB2Table, u: number, y: number, q: number, yFromU: (u: number) => number): number {
+function depletionB2FromY(table: ReducedB2Table, u: number, y: number, q: number, g: Float64Array): number {
   const n = table.u.length;
   const top = table.u[n - 1];
   if (u <= 0) return 1;
   if (u >= top) return u === top ? table.b2[n - 1] : asakuraOosawaReducedB2(q, y);
-  const g = smoothLogGap(table, q, yFromU);
   const position = (u / top) * (n - 1);
   const i = Math.min(Math.floor(position), n - 2);
   return 1 - u * Math.exp(hermite(g, i, position - i));
 }
 
-function depletionYFromB2(table: ReducedB2Table, b2: number, yFromU: (u: number) => number, q: number): number {
+function depletionYFromB2(table: ReducedB2Table, b2: number, yFromU: (u: number) => number, q: number, g: Float64Array): number {
   const n = table.u.length;
   if (b2 >= 1) return yFromU(0);
   const strongest = table.b2[n - 1];
@@ -123,7 +120,6 @@ function depletionYFromB2(table: ReducedB2Table, b2: number, yFromU: (u: number)
     if (table.b2[middle] >= b2) low = middle; else top = middle;
   }
   // Solve B2*(u) = b2 inside [u_low, u_top] on the same spline (monotone there).
-  const g = smoothLogGap(table, q, yFromU);
   const step = table.u[1] - table.u[0];
   let a = 0;
   let b = 1;
