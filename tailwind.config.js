@@ -21,7 +21,7 @@ export default {
       colors: {
         paper: '#f6f5f1',
         panel: '#ffffff',
-        ink: { DEFAULT: '#1c2630', soft: '#4a5662', faint: '#7b858f' },
+        ink: { DEFAULT: '#1c2630', soft: '#4a5662', faint: '#636d77' },
         line: { DEFAULT: '#dcd9d0', strong: '#c4c0b4' },
         fjord: { 50: '#eaf3f4', 100: '#d3e6e9', 300: '#7fb0b9', 500: '#2c6e7f', 600: '#235a68', 700: '#1b4652' },
         amber: { 50: '#fbf4e6', 100: '#f4e2bd', 500: '#b7791f', 700: '#7f5313' },

@@ -1,4 +1,6 @@
 import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters, type StateMap } from './physics';
+import { recipeAttraction } from './physics/recipe/recipe-attraction';
+import { cachedStateMap } from './state-map-cache';
 import type { RecipeInput as PhysicsRecipeInput } from './physics/recipe/recipe-types';
 import type { RecipeInput } from './schemas/recipes';
 import type { DepletantView, ParticleView, RecipeDerived, SaltView, SolventView } from './views/team-data';
@@ -95,4 +97,15 @@ export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, op
     warnings: d.warnings,
     calibration: options.calibration ?? null,
   };
+}
+
+/**
+ * The map a recipe is predicted on (free-volume map at its q for depletion, generic otherwise),
+ * from the shared cache: the same map the server stores predictions against.
+ */
+export function recipeStateMap(recipe: RecipeInput, materials: RecipeMaterials, parameters?: Partial<ClassifierParameters>): StateMap {
+  const physics = physicsInputFor(recipe, materials, parameters);
+  const phi = physics.particleVolumeFraction ?? Math.min(0.7, physics.particleMassFraction ?? 0.1);
+  const model = recipeAttraction(physics, phi, recipe.temperatureC + 273.15).mapModel;
+  return cachedStateMap(model, { parameters, polydispersity: materials.particle.polydispersityPct });
 }

@@ -18,6 +18,7 @@ export function presentShortlist(s: Loaded): ShortlistView {
     purpose: s.purpose,
     targetState: s.targetState,
     status: s.status,
+    archived: s.archivedAt != null,
     author: person(s.author),
     reviewer: person(s.reviewer),
     decisionComment: s.decisionComment,

@@ -1,33 +1,12 @@
 import type { Transaction } from 'sequelize';
-import { buildStateMap, classifyPoint, PhysicsArgumentError, type ClassifierParameters, type MapModel, type StateMap } from '../../shared/physics';
-import { recipeAttraction } from '../../shared/physics/recipe/recipe-attraction';
-import { deriveRecipe, physicsInputFor, recipeFieldOf, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { classifyPoint, PhysicsArgumentError, type ClassifierParameters } from '../../shared/physics';
+import { cachedStateMap } from '../../shared/state-map-cache';
+import { deriveRecipe, recipeFieldOf, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import type { PredictedState } from '../../shared/states';
 import type { RecipeDerived } from '../../shared/views/team-data';
 import { badRequest } from '../errors';
 import { Depletant, ParticleSystem, Salt, Solvent } from '../models';
-
-const CACHE_SIZE = 64;
-const maps = new Map<string, StateMap>();
-
-/**
- * Maps are built once per model, parameters and polydispersity and kept (least recently used
- * out): a programme's recipes share a few maps, so saving and re-predicting stay fast.
- */
-export function cachedStateMap(model: MapModel, parameters: Partial<ClassifierParameters> | undefined, polydispersity: number | undefined): StateMap {
-  const key = JSON.stringify([model, parameters ?? null, polydispersity ?? null]);
-  const hit = maps.get(key);
-  if (hit) {
-    maps.delete(key);
-    maps.set(key, hit);
-    return hit;
-  }
-  const map = buildStateMap(model, { parameters, polydispersity });
-  maps.set(key, map);
-  if (maps.size > CACHE_SIZE) maps.delete(maps.keys().next().value!);
-  return map;
-}
 
 /** The library rows of a recipe, or a 400 naming the field that points nowhere. */
 export async function recipeMaterials(input: RecipeInput, transaction: Transaction | null): Promise<RecipeMaterials> {
@@ -56,12 +35,7 @@ export async function deriveForRecipe(input: RecipeInput, transaction: Transacti
   const materials = await recipeMaterials(input, transaction);
   const { parameters, calibration } = await programmeParameters(input.programmeId, transaction);
   try {
-    const physics = physicsInputFor(input, materials, parameters);
-    const kelvin = input.temperatureC + 273.15;
-    // Work out the map the recipe belongs on, so a cached one can be handed over.
-    const phiGuess = physics.particleVolumeFraction ?? Math.min(0.7, physics.particleMassFraction ?? 0.1);
-    const model = recipeAttraction(physics, phiGuess, kelvin).mapModel;
-    const map = cachedStateMap(model, parameters, materials.particle.polydispersityPct);
+    const map = recipeStateMap(input, materials, parameters);
     return deriveRecipe(input, materials, { parameters, map, calibration });
   } catch (error) {
     if (error instanceof PhysicsArgumentError) throw badRequest(`${recipeFieldOf(error)}: ${error.message}`, recipeFieldOf(error));
@@ -73,7 +47,7 @@ export async function deriveForRecipe(input: RecipeInput, transaction: Transacti
 export async function predictAdhoc(programmeId: number, phi: number, reducedB2: number, transaction: Transaction | null): Promise<PredictedState | null> {
   const { parameters } = await programmeParameters(programmeId, transaction);
   try {
-    const map = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, parameters, undefined);
+    const map = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, { parameters });
     return classifyPoint(map, { phi, attraction: { kind: 'b2', value: reducedB2 } }, parameters).state;
   } catch (error) {
     if (error instanceof PhysicsArgumentError) throw badRequest(`adhoc: ${error.message}`, 'adhoc.phi');

@@ -180,6 +180,7 @@ export interface ShortlistView {
   purpose: string | null;
   targetState: GoalState;
   status: ShortlistStatus;
+  archived: boolean;
   author: PersonRef | null;
   reviewer: PersonRef | null;
   decisionComment: string | null;

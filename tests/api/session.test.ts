@@ -96,8 +96,10 @@ describe('GET /api/session and DELETE /api/session', () => {
     expect(Object.keys(response.body.user)).not.toContain('passwordHash');
   });
 
-  it('answers 401 without a session', async () => {
-    expect((await request(stack.app).get('/api/session')).status).toBe(401);
+  it('answers a visitor with no user, not an error', async () => {
+    const response = await request(stack.app).get('/api/session');
+    expect(response.status).toBe(200);
+    expect(response.body).toEqual({ user: null });
   });
 
   it('signs out: the cookie is cleared and the next request is anonymous', async () => {
@@ -106,7 +108,7 @@ describe('GET /api/session and DELETE /api/session', () => {
     const out = await agent.delete('/api/session');
     expect(out.status).toBe(204);
     expect(String(out.headers['set-cookie'])).toMatch(/gw_session=;/);
-    expect((await agent.get('/api/session')).status).toBe(401);
+    expect((await agent.get('/api/session')).body.user).toBeNull();
   });
 
   it('refuses expired, tampered, alg-none and foreign tokens', async () => {
@@ -114,7 +116,9 @@ describe('GET /api/session and DELETE /api/session', () => {
     const cookies = hostileSessionCookies(stack.config, who.user.id);
     for (const [kind, cookie] of Object.entries(cookies)) {
       const response = await request(stack.app).get('/api/session').set('Cookie', cookie);
-      expect(response.status, kind).toBe(401);
+      expect(response.body.user, kind).toBeNull();
+      // …and a route that needs a session refuses it.
+      expect((await request(stack.app).get('/api/users').set('Cookie', cookie)).status, kind).toBe(401);
     }
   });
 
@@ -122,6 +126,6 @@ describe('GET /api/session and DELETE /api/session', () => {
     const who = await buildUser({ role: 'scientist' });
     const agent = await signedInAgent(stack.app, who);
     await User.update({ active: false }, { where: { id: who.user.id } });
-    expect((await agent.get('/api/session')).status).toBe(401);
+    expect((await agent.get('/api/session')).body.user).toBeNull();
   });
 });

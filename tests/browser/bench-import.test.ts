@@ -3,7 +3,7 @@ import type { Browser, Page } from 'playwright-core';
 import { IMPORT_COLUMNS } from '../../shared/schemas/observations';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openPage, screenshot, signInThroughForm } from '../support/browser';
+import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, pngBytes, recipeInput } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -41,30 +41,12 @@ async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
 }
 
-/**
- * openPage, with two allowances a browser test of this app needs: the content security policy
- * (script-src 'self') is lifted so axe-core's inline tag can run, and `unexpected()` leaves out
- * requests the browser itself cancelled when the test moved on (net::ERR_ABORTED) and the answers
- * named in `expected` (401 for the session check before signing in, always).
- */
-async function openCheckedPage() {
-  const opened = await openPage(browser);
-  const cdp = await opened.context.newCDPSession(opened.page);
-  await cdp.send('Page.setBypassCSP', { enabled: true });
-  const aborted = new Set<string>();
-  opened.page.on('requestfailed', (request) => {
-    if (request.failure()?.errorText === 'net::ERR_ABORTED') aborted.add(`request failed: ${request.url()}`);
-  });
-  const unexpected = (expected: number[] = []) =>
-    opened.problems.filter((p) => !aborted.has(p) && ![401, ...expected].some((status) => p.includes(`status of ${status} `)));
-  return { ...opened, unexpected };
-}
 
 describe('the bench log', () => {
   it('a scientist imports a CSV with one bad row: nothing is imported and the row is shown; the fixed file imports once and its rows are in the log', async () => {
     const [first, second] = recipes;
     expect(first.derived.predictedState && second.derived.predictedState).toBeTruthy();
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, scientist.email, scientist.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Bench log' }).click();
     await page.getByRole('heading', { name: 'Bench log', level: 1 }).waitFor();
@@ -128,7 +110,7 @@ describe('the bench log', () => {
     const [first] = recipes;
     // "Collapsed gel" is never a predicted state, so it disagrees with whatever was predicted.
     expect(first.derived.predictedState).not.toBeNull();
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, scientist.email, scientist.password);
     await page.goto(`${stack.url}/bench?programme=${programme.id}`);
     await page.getByRole('button', { name: 'Record an outcome' }).click();

@@ -4,7 +4,7 @@ import { STATE_DESCRIPTIONS, STATE_LABELS, type PredictedState } from '../../sha
 import type { RecipeDerived } from '../../shared/views/team-data';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openPage, screenshot, signInThroughForm } from '../support/browser';
+import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -46,24 +46,6 @@ async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
 }
 
-/**
- * openPage, with two allowances a browser test of this app needs: the content security policy
- * (script-src 'self') is lifted so axe-core's inline tag can run, and `unexpected()` leaves out
- * requests the browser itself cancelled when the test moved on (net::ERR_ABORTED) and the answers
- * named in `expected` (401 for the session check before signing in, always).
- */
-async function openCheckedPage() {
-  const opened = await openPage(browser);
-  const cdp = await opened.context.newCDPSession(opened.page);
-  await cdp.send('Page.setBypassCSP', { enabled: true });
-  const aborted = new Set<string>();
-  opened.page.on('requestfailed', (request) => {
-    if (request.failure()?.errorText === 'net::ERR_ABORTED') aborted.add(`request failed: ${request.url()}`);
-  });
-  const unexpected = (expected: number[] = []) =>
-    opened.problems.filter((p) => !aborted.has(p) && ![401, ...expected].some((status) => p.includes(`status of ${status} `)));
-  return { ...opened, unexpected };
-}
 
 /** Every button in the page's main region: a viewer's may only search, filter, page or retry. */
 async function mainButtons(page: Page) {
@@ -73,7 +55,7 @@ const READING_BUTTONS = new Set(['Find', 'Clear filters', 'Newer', 'Older', 'Try
 
 describe('a viewer looks things up', () => {
   it('finds a recipe by its code and reads where it sits, why, how close to a boundary, what the bench saw, and the cautions', async () => {
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, viewer.email, viewer.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Find' }).click();
     await page.getByRole('heading', { name: 'Find', level: 1 }).waitFor();
@@ -108,7 +90,7 @@ describe('a viewer looks things up', () => {
   });
 
   it('sees no edit controls on the library, the bench log or the shortlists, and the server refuses a change anyway', async () => {
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, viewer.email, viewer.password);
 
     await page.goto(`${stack.url}/library`);

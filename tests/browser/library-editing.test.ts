@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { ParticleSystem } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openPage, screenshot, signInThroughForm } from '../support/browser';
+import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
 import { buildUser, unique } from '../support/builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
 
@@ -21,30 +21,12 @@ async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
 }
 
-/**
- * openPage, with two allowances a browser test of this app needs: the content security policy
- * (script-src 'self') is lifted so axe-core's inline tag can run, and `unexpected()` leaves out
- * requests the browser itself cancelled when the test moved on (net::ERR_ABORTED) and the answers
- * named in `expected` (401 for the session check before signing in, always).
- */
-async function openCheckedPage() {
-  const opened = await openPage(browser);
-  const cdp = await opened.context.newCDPSession(opened.page);
-  await cdp.send('Page.setBypassCSP', { enabled: true });
-  const aborted = new Set<string>();
-  opened.page.on('requestfailed', (request) => {
-    if (request.failure()?.errorText === 'net::ERR_ABORTED') aborted.add(`request failed: ${request.url()}`);
-  });
-  const unexpected = (expected: number[] = []) =>
-    opened.problems.filter((p) => !aborted.has(p) && ![401, ...expected].some((status) => p.includes(`status of ${status} `)));
-  return { ...opened, unexpected };
-}
 
 describe('editing the library', () => {
   it('a formulator adds a particle system (errors next to the fields first), replaces it, archives and restores it', async () => {
     const name = unique('Latex 250 nm');
     const formulator = await buildUser({ role: 'formulator' });
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, formulator.email, formulator.password);
     await page.goto(`${stack.url}/library`);
     await page.getByRole('button', { name: 'Add a particle system' }).click();

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openPage, screenshot, signInThroughForm } from '../support/browser';
+import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
 import { buildUser, latestMailTo, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -38,24 +38,6 @@ async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
 }
 
-/**
- * openPage, with two allowances a browser test of this app needs: the content security policy
- * (script-src 'self') is lifted so axe-core's inline tag can run, and `unexpected()` leaves out
- * requests the browser itself cancelled when the test moved on (net::ERR_ABORTED) and the answers
- * named in `expected` (401 for the session check before signing in, always).
- */
-async function openCheckedPage() {
-  const opened = await openPage(browser);
-  const cdp = await opened.context.newCDPSession(opened.page);
-  await cdp.send('Page.setBypassCSP', { enabled: true });
-  const aborted = new Set<string>();
-  opened.page.on('requestfailed', (request) => {
-    if (request.failure()?.errorText === 'net::ERR_ABORTED') aborted.add(`request failed: ${request.url()}`);
-  });
-  const unexpected = (expected: number[] = []) =>
-    opened.problems.filter((p) => !aborted.has(p) && ![401, ...expected].some((status) => p.includes(`status of ${status} `)));
-  return { ...opened, unexpected };
-}
 
 async function signOut(page: Page) {
   await page.getByRole('button', { name: 'Sign out' }).click();
@@ -66,7 +48,7 @@ describe('a shortlist from draft to approval', () => {
   it('a formulator creates and submits a shortlist, a manager approves it, and the approval mail reaches the author', async () => {
     const [first, second] = recipes;
     const title = `Thirty-day shelf candidates ${Date.now().toString(36)}`;
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, formulator.email, formulator.password);
     await page.goto(`${stack.url}/shortlists?programme=${programme.id}`);
     await page.getByText('No shortlist in this programme yet').waitFor();
@@ -144,7 +126,7 @@ describe('a shortlist from draft to approval', () => {
     const id = created.body.shortlist.id;
     expect((await formulatorAgent.post(`/api/shortlists/${id}/submit`)).status).toBe(200);
 
-    const { page, context, unexpected } = await openCheckedPage();
+    const { page, context, unexpected } = await openCheckedPage(browser);
     await signInThroughForm(page, stack.url, manager.email, manager.password);
     await page.goto(`${stack.url}/shortlists/${id}`);
     await page.getByRole('button', { name: 'Return to the author' }).click();

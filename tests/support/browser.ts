@@ -21,7 +21,10 @@ export async function openPage(browser: Browser) {
     if (message.type() === 'error') problems.push(`console: ${message.text()}`);
   });
   page.on('pageerror', (error) => problems.push(`page error: ${error.message}`));
-  page.on('requestfailed', (req) => problems.push(`request failed: ${req.url()}`));
+  // A request the page itself cancelled (navigating away) is not a fault.
+  page.on('requestfailed', (req) => {
+    if (req.failure()?.errorText !== 'net::ERR_ABORTED') problems.push(`request failed: ${req.url()} ${req.failure()?.errorText ?? ''}`);
+  });
   return { page, context, problems };
 }
 
@@ -37,4 +40,14 @@ export async function signInThroughForm(page: Page, baseUrl: string, email: stri
   await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
   await page.getByTestId('signed-in-name').waitFor();
+}
+
+/**
+ * openPage plus `unexpected()`: the console and network problems seen so far, less the statuses
+ * a test expects (e.g. 403 when it checks a refusal).
+ */
+export async function openCheckedPage(browser: Browser) {
+  const opened = await openPage(browser);
+  const unexpected = (expected: number[] = []) => opened.problems.filter((p) => !expected.some((status) => p.includes(`status of ${status} `)));
+  return { ...opened, unexpected };
 }

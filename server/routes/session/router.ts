@@ -44,11 +44,11 @@ export const sessionRoutes = [
   route({
     method: 'get',
     path: '/api/session',
-    access: 'signedIn',
-    summary: 'The signed-in user',
+    access: 'public',
+    summary: 'The signed-in user, or null for a visitor (so a page can ask without an error)',
     async handler({ user, res }) {
       res.setHeader('Cache-Control', 'no-store');
-      return { body: { user: presentUser(user!) } };
+      return { body: { user: user ? presentUser(user) : null } };
     },
   }),
   route({

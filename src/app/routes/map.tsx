@@ -65,9 +65,18 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
     (next: MapView) => setParams((previous) => writeMapView(previous, next), { replace: true }),
     [setParams],
   );
-  const built = useStateMapDrawing({ view, sizeRatio });
+  const strongest = useMemo(() => {
+    const b2 = data.recipes.columns.indexOf('reducedB2');
+    const polymer = data.recipes.columns.indexOf('polymerReservoir');
+    const numbers = (column: number) => data.recipes.rows.map((r) => r[column]).filter((v): v is number => typeof v === 'number' && Number.isFinite(v));
+    const b2s = numbers(b2);
+    const polymers = numbers(polymer);
+    return { reducedB2: b2s.length ? Math.min(...b2s) : null, polymerReservoir: polymers.length ? Math.max(...polymers) : null };
+  }, [data]);
+  const built = useStateMapDrawing({ view, sizeRatio, strongest });
   const [selected, setSelected] = useState<MapPoint[]>([]);
-  const svgRef = useRef<SVGSVGElement>(null);
+  // The export buttons need the elements themselves, so keep them in state (a ref would not re-render).
+  const [svgElement, setSvgElement] = useState<SVGSVGElement | null>(null);
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const placed = useMemo(() => (built.map ? placePoints(built.map, data, { minAge: view.minAge, maxAge: view.maxAge }) : { points: [], skipped: 0 }), [built.map, data, view.minAge, view.maxAge]);
   const visible = useMemo(
@@ -87,6 +96,7 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
   const recipes = placed.points.filter((p) => p.kind === 'recipe').length;
   const observations = placed.points.length - recipes;
   const mismatches = placed.points.filter((p) => p.agrees === false).length;
+  const offMap = placed.points.filter((p) => p.y > drawing.yDomain[1] || p.y < drawing.yDomain[0]).length;
   const toggle = (layer: Layer) => {
     const layers = new Set(view.layers);
     if (layers.has(layer)) layers.delete(layer);
@@ -97,7 +107,7 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <MapControls view={view} onChange={setView} depletion={depletion} />
-        <MapExports svg={svgRef.current} canvas={canvasRef.current} points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} fileStem={`gelwright-${programme.codePrefix.toLowerCase()}-map`} />
+        <MapExports svg={svgElement} canvas={canvasRef.current} points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} fileStem={`gelwright-${programme.codePrefix.toLowerCase()}-map`} />
       </div>
       <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_18rem]">
         <Card>
@@ -110,13 +120,14 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
             selected={selectedKeys}
             onSelect={setSelected}
             onOpen={onOpen}
-            svgRef={svgRef}
+            svgRef={setSvgElement}
             canvasRef={canvasRef}
             ariaLabel={`State map of ${programme.name}: ${drawing.modelLabel}; ${recipes} recipes and ${observations} observations, ${mismatches} differing from the prediction`}
           />
           <p className="mt-3 text-xs text-ink-soft" data-testid="map-model-note">
             Lines are approximate: {drawing.modelLabel}. {drawing.notes.join(' ')}
             {placed.skipped > 0 ? ` ${placed.skipped} point${placed.skipped === 1 ? ' has' : 's have'} no coordinate on this axis and ${placed.skipped === 1 ? 'is' : 'are'} not shown.` : ''}
+            {offMap > 0 ? ` ${offMap} point${offMap === 1 ? ' lies' : 's lie'} beyond the drawn attraction range (stronger than the map's top) and ${offMap === 1 ? 'is' : 'are'} not shown.` : ''}
           </p>
         </Card>
         <div className="flex flex-col gap-5">

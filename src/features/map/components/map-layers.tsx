@@ -29,22 +29,57 @@ function pathOf(points: XY[], scales: MapScales) {
     .y(([, y]) => scales.y(y))(points) ?? '';
 }
 
-/** Where a line's label goes: the visible point furthest from the plot's edges, nudged up. */
-function labelSpot(points: XY[], scales: MapScales): [number, number] | null {
-  let best: [number, number] | null = null;
-  let bestScore = -Infinity;
-  for (const [x, y] of points) {
-    const px = scales.x(x);
-    const py = scales.y(y);
-    const edge = Math.min(px, scales.inner.width - px, py, scales.inner.height - py);
-    if (edge < 12) continue;
-    const score = Math.min(edge, 80) + px * 0.02;
-    if (score > bestScore) {
-      bestScore = score;
-      best = [px, py - 5];
+interface Box {
+  x0: number;
+  y0: number;
+  x1: number;
+  y1: number;
+}
+
+/** A marker's name without its parenthesised numbers (those stay in its tooltip). */
+const shortLabel = (label: string) => label.split(' (')[0];
+
+/** The space the marker labels take, kept free of line labels. */
+function markerBoxes(drawing: MapDrawing, scales: MapScales): Box[] {
+  return drawing.markers.map((m) => {
+    const x = scales.x(m.x);
+    const y = scales.y(m.y);
+    return { x0: x - 6, y0: y - 18, x1: x + 10 + shortLabel(m.label).length * 6, y1: y + 6 };
+  });
+}
+
+const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
+
+/**
+ * Places each line's label on a visible stretch of its line, trying spots along it until one
+ * neither leaves the plot nor covers a label already placed; a line with no free spot goes
+ * unlabelled (its name is still in the legend of lines below the map).
+ */
+export function placeLineLabels(lines: { id: string; label: string; points: XY[] }[], scales: MapScales, reserved: Box[] = []) {
+  const placed: Box[] = [...reserved];
+  const out = new Map<string, { x: number; y: number; anchor: 'start' | 'end' }>();
+  const named = new Set<string>();
+  for (const line of lines) {
+    if (named.has(line.label)) continue;
+    const width = Math.min(260, line.label.length * 5.6);
+    const visible = line.points
+      .map(([x, y]) => [scales.x(x), scales.y(y)] as [number, number])
+      .filter(([px, py]) => px > 4 && py > 14 && px < scales.inner.width - 4 && py < scales.inner.height - 4);
+    const step = Math.max(1, Math.floor(visible.length / 12));
+    for (let i = Math.floor(visible.length * 0.35); i < visible.length + visible.length; i += step) {
+      const [px, py] = visible[i % Math.max(1, visible.length)] ?? [];
+      if (px === undefined) break;
+      const anchor = px + width + 6 > scales.inner.width ? 'end' : 'start';
+      const box: Box = anchor === 'start' ? { x0: px + 3, y0: py - 16, x1: px + 3 + width, y1: py - 3 } : { x0: px - 3 - width, y0: py - 16, x1: px - 3, y1: py - 3 };
+      if (box.x0 < 0 || box.y0 < 0) continue;
+      if (placed.some((b) => overlaps(b, box))) continue;
+      placed.push(box);
+      named.add(line.label);
+      out.set(line.id, { x: anchor === 'start' ? px + 3 : px - 3, y: py - 5, anchor });
+      break;
     }
   }
-  return best;
+  return out;
 }
 
 export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawing: MapDrawing; regions: StateRegion[]; scales: MapScales; layers: Set<Layer>; clipId: string }) {
@@ -77,9 +112,10 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
           drawing.markers.map((m) => (
             <g key={m.id} transform={`translate(${scales.x(m.x)},${scales.y(m.y)})`} data-marker={m.id}>
               {m.reference ? <path d="M-5,-5L5,5M-5,5L5,-5" stroke="#1c2630" strokeWidth={1.6} /> : <circle r={4.5} fill="#1c2630" stroke="#ffffff" strokeWidth={1.5} />}
+              <title>{m.label}</title>
               {layers.has('labels') && (
                 <text x={7} y={-6} fontSize={11} fill="#1c2630" paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
-                  {m.label}
+                  {shortLabel(m.label)}
                 </text>
               )}
             </g>
@@ -97,13 +133,13 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
             );
           })}
         {layers.has('labels') && layers.has('lines') &&
-          drawing.lines.map((l) => {
-            const spot = labelSpot(l.points, scales);
-            return spot ? (
-              <text key={l.id} x={spot[0]} y={spot[1]} fontSize={11} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+          [...placeLineLabels(drawing.lines, scales, markerBoxes(drawing, scales)).entries()].map(([id, spot]) => {
+            const l = drawing.lines.find((line) => line.id === id)!;
+            return (
+              <text key={id} x={spot.x} y={spot.y} textAnchor={spot.anchor} fontSize={10.5} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
                 {l.label}
               </text>
-            ) : null;
+            );
           })}
       </g>
     </>

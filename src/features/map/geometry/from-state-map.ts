@@ -26,7 +26,8 @@ export function drawingFromStateMap(map: StateMap): MapDrawing {
     xDomain: [map.x.domain[0], map.x.domain[1]],
     yDomain,
     xLabel: `Volume fraction ${map.x.label}`,
-    yLabel: `${map.y.label}${unit} — ${map.y.quantity}${map.y.inverted ? ', more negative is stickier' : ''}`,
+    // The symbol and a short name; the long description stays in the notes under the map.
+    yLabel: `${map.y.label}${unit} — ${map.y.quantity.split(' (')[0]}${map.y.inverted ? ' (stickier upward)' : ''}`,
     modelLabel: map.modelName,
     lines: map.boundaries.map((b, index) => ({
       id: `${b.id}-${index}`,

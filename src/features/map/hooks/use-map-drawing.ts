@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import { buildStateMap } from '@shared/physics/map/build-state-map';
 import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
+import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
 import type { MapPoints } from '@shared/views/team-data';
 import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
@@ -12,6 +13,8 @@ export interface MapRequest {
   view: MapView;
   /** Size ratio of the programme's polymer and particles (depletion programmes), or null. */
   sizeRatio: number | null;
+  /** The strongest attraction among the programme's points, so the map reaches up to them. */
+  strongest?: { reducedB2: number | null; polymerReservoir: number | null };
   parameters?: Partial<ClassifierParameters>;
   polydispersity?: number;
 }
@@ -26,15 +29,38 @@ export function modelFor(view: MapView, sizeRatio: number | null): MapModel {
 /** Builds (and memoises) the state map of the view, and the drawing of it. */
 export function useStateMapDrawing(request: MapRequest): { map: StateMap; drawing: MapDrawing; error: null } | { map: null; drawing: null; error: Error } {
   const model = modelFor(request.view, request.sizeRatio);
-  const key = JSON.stringify([model, request.parameters ?? null, request.polydispersity ?? null]);
+  const yMax = axisTop(model, request.strongest);
+  const key = JSON.stringify([model, request.parameters ?? null, request.polydispersity ?? null, yMax ?? null]);
   return useMemo(() => {
     try {
-      const map = buildStateMap(model, { parameters: request.parameters, polydispersity: request.polydispersity });
+      const map = buildStateMap(model, { parameters: request.parameters, polydispersity: request.polydispersity, yMax });
       return { map, drawing: drawingFromStateMap(map), error: null };
     } catch (error) {
       return { map: null, drawing: null, error: error as Error };
     }
   }, [key]);
+}
+
+/** B2* the maps reach by default, and the strongest they may reach (shared/physics build-axis). */
+const DEFAULT_TOP_B2 = -10;
+const STRONGEST_TOP_B2 = -20;
+
+/**
+ * The top of the y axis in its own unit when the programme's points go past the default top
+ * (B2* = −10), with 10 % headroom; undefined keeps the default.
+ */
+export function axisTop(model: MapModel, strongest: MapRequest['strongest']): number | undefined {
+  if (!strongest) return undefined;
+  if (model.kind === 'depletion') {
+    const top = strongest.polymerReservoir;
+    return top !== null && top > 0 ? Math.min(20, Number((top * 1.1).toPrecision(3))) : undefined;
+  }
+  const b2 = strongest.reducedB2;
+  if (b2 === null || b2 >= DEFAULT_TOP_B2) return undefined;
+  const target = Math.max(STRONGEST_TOP_B2, b2 * 1.1);
+  if (model.axis === 'b2') return target;
+  if (model.axis === 'inverseTau') return 4 * (1 - target);
+  return squareWellDepthFromReducedB2(target, model.lambda ?? 1.5);
 }
 
 /**

@@ -1,0 +1,86 @@
+import { Link, useParams } from 'react-router-dom';
+import { can } from '@shared/permissions';
+import { Button } from '@/components/ui/button';
+import { Card, PageHeader } from '@/components/ui/page';
+import { Notice } from '@/components/ui/notice';
+import { StateBadge } from '@/components/ui/state-badge';
+import { ErrorState, Loading } from '@/components/ui/states';
+import { ApiError } from '@/lib/api-client';
+import { useSession } from '@/features/auth/api/get-session';
+import { SafetyNote } from '@/features/cautions/safety-note';
+import { RecipeMiniMap } from '@/features/map/components/recipe-mini-map';
+import { withProgramme } from '@/features/programmes/hooks/use-programme-param';
+import { useArchiveRecipe } from '@/features/recipes/api/archive-recipe';
+import { useRecipe } from '@/features/recipes/api/get-recipe';
+import { useRecipeObservations } from '@/features/recipes/api/get-recipe-observations';
+import { DerivedPanel } from '@/features/recipes/components/derived-panel';
+import { ObservationTimeline } from '@/features/recipes/components/observation-timeline';
+import { RecipeComposition } from '@/features/recipes/components/recipe-composition';
+import { useRecipeMap } from '@/features/recipes/hooks/use-recipe-map';
+
+export function RecipeDetailRoute() {
+  const { code = '' } = useParams();
+  const { data: user } = useSession();
+  const recipe = useRecipe(code.toUpperCase());
+  const observations = useRecipeObservations(recipe.data?.id);
+  const map = useRecipeMap(recipe.data);
+  const archive = useArchiveRecipe();
+  if (recipe.isPending) return <Loading label="Loading the recipe…" />;
+  if (recipe.isError) return recipe.error instanceof ApiError && recipe.error.status === 404 ? <Notice tone="warning" title={`No recipe has the code ${code}`}>Check the code, or <Link to="/find">search for it</Link>.</Notice> : <ErrorState error={recipe.error} retry={() => recipe.refetch()} />;
+  const r = recipe.data;
+  const canWrite = can(user?.role, 'recipes.write');
+  return (
+    <>
+      <PageHeader
+        title={`${r.code} · ${r.name}`}
+        subtitle={
+          <span className="inline-flex flex-wrap items-center gap-2">
+            <StateBadge state={r.derived.predictedState} prefix="Predicted" />
+            {r.archived && <span className="text-amber-700">Archived</span>}
+            <span>Created by {r.createdBy?.name ?? 'someone'} · updated {r.updatedAt.slice(0, 10)}</span>
+          </span>
+        }
+        actions={
+          <>
+            <Link to={withProgramme('/map', r.programmeId)} className="rounded-md border border-line-strong bg-panel px-4 py-2 text-sm no-underline hover:bg-fjord-50 hover:no-underline">
+              On the programme map
+            </Link>
+            {canWrite && !r.archived && (
+              <Link to={`/recipes/${r.code}/edit`} className="rounded-md bg-fjord-500 px-4 py-2 text-sm font-medium text-white no-underline hover:bg-fjord-600 hover:no-underline">
+                Edit recipe
+              </Link>
+            )}
+            {canWrite && (
+              <Button variant="secondary" busy={archive.isPending} onClick={() => archive.mutate({ id: r.id, archived: !r.archived })}>
+                {r.archived ? 'Restore' : 'Archive'}
+              </Button>
+            )}
+          </>
+        }
+      />
+      <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_minmax(22rem,30rem)]">
+        <div className="flex flex-col gap-5">
+          <Card title="Where it sits">
+            <DerivedPanel derived={r.derived} />
+          </Card>
+          <Card title="Bench outcomes by age">
+            {observations.isPending ? <Loading /> : observations.isError ? <ErrorState error={observations.error} /> : <ObservationTimeline observations={observations.data} />}
+          </Card>
+        </div>
+        <div className="flex flex-col gap-5">
+          <Card title="On its state map">
+            {map ? (
+              <RecipeMiniMap map={map} derived={r.derived} code={r.code} observations={(observations.data ?? []).map((o) => ({ id: o.id, state: o.observedState, ageDays: o.ageDays, agrees: o.agrees }))} />
+            ) : (
+              <Loading label="Drawing the map…" />
+            )}
+          </Card>
+          <Card title="Composition">
+            <RecipeComposition recipe={r} />
+          </Card>
+          <SafetyNote />
+        </div>
+      </div>
+    </>
+  );
+}

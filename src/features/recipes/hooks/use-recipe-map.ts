@@ -1,0 +1,42 @@
+import { useMemo } from 'react';
+import type { StateMap } from '@shared/physics/map/types';
+import { recipeStateMap } from '@shared/recipe-derivation';
+import type { RecipeInput } from '@shared/schemas/recipes';
+import type { RecipeView } from '@shared/views/team-data';
+import { useRecipeMaterials } from '../api/get-materials';
+
+/** A stored recipe as the editor's input (what PUT /api/recipes/:id takes). */
+export function recipeAsInput(recipe: RecipeView): RecipeInput {
+  return {
+    programmeId: recipe.programmeId,
+    name: recipe.name,
+    particleId: recipe.particleId,
+    solventId: recipe.solventId,
+    fraction: recipe.fraction,
+    temperatureC: recipe.temperatureC,
+    attraction: recipe.attraction,
+    notes: recipe.notes ?? undefined,
+  };
+}
+
+/** The map a stored recipe is predicted on, rebuilt in the browser from the same library rows. */
+export function useRecipeMap(recipe: RecipeView | undefined): StateMap | null {
+  const particles = useRecipeMaterials('particles');
+  const solvents = useRecipeMaterials('solvents');
+  const depletants = useRecipeMaterials('depletants');
+  const salts = useRecipeMaterials('salts');
+  return useMemo(() => {
+    if (!recipe || !particles.data || !solvents.data || !depletants.data || !salts.data) return null;
+    const particle = particles.data.find((m) => m.id === recipe.particleId);
+    const solvent = solvents.data.find((m) => m.id === recipe.solventId);
+    if (!particle || !solvent) return null;
+    const a = recipe.attraction;
+    const depletant = a.source === 'depletion' ? depletants.data.find((m) => m.id === a.depletantId) ?? null : null;
+    const salt = a.source === 'salt' ? salts.data.find((m) => m.id === a.saltId) ?? null : null;
+    try {
+      return recipeStateMap(recipeAsInput(recipe), { particle, solvent, depletant, salt });
+    } catch {
+      return null;
+    }
+  }, [recipe, particles.data, solvents.data, depletants.data, salts.data]);
+}
