@@ -12,6 +12,7 @@ import { meanFieldCriticalPoint } from '../fluid-fluid/mean-field-critical-point
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { hardSphereFluidSolidCoexistence } from '../hard-spheres/hard-sphere-fluid-solid-coexistence';
 import { buildStateMap } from './build-state-map';
+import { classifyPoint } from './classify-point';
 import { domeAt } from './state-rule';
 import { allNumbers, baxterB2Map, cachedMap, depletionMap, meanFieldB2Map } from '../test-support/map-builders';
 import { expectArgumentError } from '../test-support/expect-relative';
@@ -162,6 +163,23 @@ describe('buildStateMap', () => {
     expect(map.regions.cells).toHaveLength(2000);
     expect(map.regions.codes).toEqual(['fluid', 'gel', 'glass', 'crystal', 'separated', 'crystal-suppressed']);
     for (const code of [0, 1, 2, 3, 4]) expect(map.regions.cells).toContain(code);
+  });
+
+  it('fills each region cell with the state classifyPoint gives at the cell centre', () => {
+    for (const map of [meanFieldB2Map(), depletionMap(0.35), cachedMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, { polydispersity: 15 })]) {
+      const { columns, rows, cells, codes } = map.regions;
+      for (let r = 0; r < rows; r += 3) {
+        const y = map.y.weakest + ((r + 0.5) / rows) * (map.y.strongest - map.y.weakest);
+        for (let c = 0; c < columns; c += 2) {
+          const phi = ((c + 0.5) / columns) * FCC_CLOSE_PACKING;
+          const attraction = map.model.kind === 'depletion'
+            ? { kind: 'depletion' as const, q: map.model.q, polymerReservoir: y }
+            : { kind: 'b2' as const, value: y };
+          const code = codes[cells[r * columns + c]];
+          expect(classifyPoint(map, { phi, attraction }).state).toBe(code === 'crystal-suppressed' ? 'fluid' : code);
+        }
+      }
+    }
   });
 
   it('rejects bad models and options, naming the field', () => {

@@ -266,22 +266,37 @@ function buildMarkers(traced: TheoryCurves, drawn: MapFrame, names: { critical: 
   return markers;
 }
 
+/**
+ * The region grid. Along a row the attraction is fixed, so the rule's cause can only change at
+ * the row's thresholds (spinodal, binodal, glassPhi, freezing, melting and where the attractive-
+ * glass line crosses the row): the rule is evaluated once per interval between them (at its
+ * middle) and the interval's cells filled.
+ */
 function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFrame, parameters: ClassifierParameters, crystalSuppressed: boolean, columns: number, rows: number): StateRegions {
   const codes = new Uint8Array(columns * rows);
   const row = emptyRow();
-  // Imported bindings read once: the loop runs columns × rows times.
   const closePacking = FCC_CLOSE_PACKING;
-  const rule = causeOnRow;
-  const codeOf = CODE_OF_CAUSE;
+  const step = closePacking / columns;
   for (let r = 0; r < rows; r++) {
-    // Every cell of a row shares its attraction, hence its thresholds.
     const y = drawn.yFromU((r + 0.5) / rows);
     const effectiveB2 = drawn.b2FromY(y) - drawn.shift;
     const u0 = drawn.shift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(effectiveB2));
     ruleRowAt(tables, u0, effectiveB2, row);
-    for (let column = 0; column < columns; column++) {
-      const phi = ((column + 0.5) / columns) * closePacking;
-      codes[r * columns + column] = codeOf[rule(row, parameters, crystalSuppressed, phi)];
+    const attractiveFrom = parameters.attractiveGlassSlope > 0
+      ? parameters.glassPhi - (parameters.attractiveGlassB2 - effectiveB2) / parameters.attractiveGlassSlope
+      : NaN;
+    const cuts = [row.spinodalLow, row.spinodalHigh, row.binodalLow, row.binodalHigh, parameters.glassPhi, row.freezing, row.melting, attractiveFrom]
+      .filter((phi) => phi > 0 && phi < closePacking)
+      .sort((a, b) => a - b);
+    cuts.push(closePacking);
+    let column = 0;
+    let start = 0;
+    for (const end of cuts) {
+      if (end <= start) continue;
+      const code = CODE_OF_CAUSE[causeOnRow(row, parameters, crystalSuppressed, 0.5 * (start + end))];
+      // Cells whose centre lies in [start, end).
+      while (column < columns && (column + 0.5) * step < end) codes[r * columns + column++] = code;
+      start = end;
     }
   }
   return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells: Array.from(codes) };

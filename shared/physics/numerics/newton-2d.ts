@@ -1,7 +1,8 @@
-/** Residual and Jacobian of a two-equation system at (x, y). */
-export interface System2d {
-  (x: number, y: number): { f: [number, number]; jacobian: [[number, number], [number, number]] };
-}
+/**
+ * Residual and Jacobian of a two-equation system at (x, y), written into `out` as
+ * [f₁, f₂, ∂f₁/∂x, ∂f₁/∂y, ∂f₂/∂x, ∂f₂/∂y] (no allocation per evaluation).
+ */
+export type System2d = (x: number, y: number, out: Float64Array) => void;
 
 export interface Newton2dOptions {
   /** Converged when max |f_i| ≤ residualTolerance (default 1e-13). */
@@ -20,22 +21,28 @@ export interface Newton2dOptions {
  * @returns the converged point, or `null` if the Jacobian is singular, a step cannot be kept in
  *   the domain, or it does not converge within maxIterations (default 30).
  * @example
- * newton2d((x, y) => ({ f: [x * x - 2, y - x], jacobian: [[2 * x, 0], [-1, 1]] }), 1, 1)
+ * newton2d((x, y, out) => out.set([x * x - 2, y - x, 2 * x, 0, -1, 1]), 1, 1)
  * // [1.4142135623730951, 1.4142135623730951]
  */
 export function newton2d(system: System2d, x0: number, y0: number, options: Newton2dOptions = {}): [number, number] | null {
   const tolerance = options.residualTolerance ?? 1e-13;
   const maxIterations = options.maxIterations ?? 30;
-  const inDomain = options.inDomain ?? (() => true);
+  const inDomain = options.inDomain;
+  const current = new Float64Array(6);
+  const next = new Float64Array(6);
   let x = x0;
   let y = y0;
-  let current = system(x, y);
+  system(x, y, current);
   for (let iteration = 0; iteration < maxIterations; iteration++) {
-    const [f1, f2] = current.f;
+    const f1 = current[0];
+    const f2 = current[1];
     if (!Number.isFinite(f1) || !Number.isFinite(f2)) return null;
     const size = Math.max(Math.abs(f1), Math.abs(f2));
     if (size <= tolerance) return [x, y];
-    const [[a, b], [c, d]] = current.jacobian;
+    const a = current[2];
+    const b = current[3];
+    const c = current[4];
+    const d = current[5];
     const determinant = a * d - b * c;
     if (!Number.isFinite(determinant) || determinant === 0) return null;
     let dx = (-f1 * d + f2 * b) / determinant;
@@ -44,18 +51,21 @@ export function newton2d(system: System2d, x0: number, y0: number, options: Newt
     for (let halving = 0; halving < 40; halving++) {
       const nx = x + dx;
       const ny = y + dy;
-      if (inDomain(nx, ny)) {
-        const next = system(nx, ny);
-        const nextSize = Math.max(Math.abs(next.f[0]), Math.abs(next.f[1]));
+      if (!inDomain || inDomain(nx, ny)) {
+        system(nx, ny, next);
+        const nextSize = Math.max(Math.abs(next[0]), Math.abs(next[1]));
         if (Number.isFinite(nextSize) && (nextSize < size || halving > 8)) {
-          x = nx; y = ny; current = next; accepted = true;
+          x = nx;
+          y = ny;
+          current.set(next);
+          accepted = true;
           break;
         }
       }
-      dx *= 0.5; dy *= 0.5;
+      dx *= 0.5;
+      dy *= 0.5;
     }
     if (!accepted) return null;
   }
-  const [f1, f2] = current.f;
-  return Math.max(Math.abs(f1), Math.abs(f2)) <= tolerance * 100 ? [x, y] : null;
+  return Math.max(Math.abs(current[0]), Math.abs(current[1])) <= tolerance * 100 ? [x, y] : null;
 }

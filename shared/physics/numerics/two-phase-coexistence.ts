@@ -120,16 +120,18 @@ export function twoBranchCoexistence(first: PhaseBranch, second: PhaseBranch): C
  */
 export function polishCoexistence(first: PhaseBranch, second: PhaseBranch, phiFirst: number, phiSecond: number): [number, number] | null {
   const result = newton2d(
-    (u, v) => {
+    (u, v, out) => {
       const a = Math.exp(u);
       const b = Math.exp(v);
       const dpa = first.pressureDerivative(a);
       const dpb = second.pressureDerivative(b);
-      return {
-        f: [first.pressure(a) - second.pressure(b), first.chemicalPotential(a) - second.chemicalPotential(b)],
-        // d/d ln φ of p̃ is φ·p̃′; of βμ it is p̃′ (dμ = dp̃/φ).
-        jacobian: [[a * dpa, -b * dpb], [dpa, -dpb]],
-      };
+      out[0] = first.pressure(a) - second.pressure(b);
+      out[1] = first.chemicalPotential(a) - second.chemicalPotential(b);
+      // d/d ln φ of p̃ is φ·p̃′; of βμ it is p̃′ (dμ = dp̃/φ).
+      out[2] = a * dpa;
+      out[3] = -b * dpb;
+      out[4] = dpa;
+      out[5] = -dpb;
     },
     Math.log(phiFirst),
     Math.log(phiSecond),
