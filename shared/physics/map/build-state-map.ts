@@ -114,7 +114,8 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
   const curves = buildDrawnCurves(partial, theory, drawn, parameters, names);
   const tables: ClassifierTables = { ...partial, ...(table ? { reducedB2: table } : {}), curves, active: [] };
   const stateAt = (phi: number, y: number) => stateOfCause(stateAtDrawnPoint(tables, theory, drawn, parameters, crystalSuppressed, phi, y));
-  tables.active = curves.map((curve) => activeSegments(curve, drawn, stateAt));
+  // Percolation never changes the predicted state (the rule does not use it): no need to test it.
+  tables.active = curves.map((curve) => (curve.id === 'percolation' ? curve.points.slice(1).map(() => 0) : activeSegments(curve, drawn, stateAt)));
 
   return {
     modelVersion: PHYSICS_MODEL_VERSION,
