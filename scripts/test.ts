@@ -22,6 +22,8 @@ async function main(): Promise<number> {
   const env = testEnvironment();
   Object.assign(process.env, env);
   ensureDebianPackage('chromium', 'chromium', ['/usr/bin/chromium']);
+  // pdftotext and pdfinfo read the printed shortlist dossier back in its browser test.
+  ensureDebianPackage('pdftotext', 'poppler-utils', ['/usr/bin/pdftotext']);
 
   // Each run has its own instance (own port, own data folder), so two runs never share a database.
   removeStaleTestInstances();

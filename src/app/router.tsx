@@ -13,6 +13,8 @@ const router = createBrowserRouter([
     element: <RequireSession />,
     errorElement: <RouteError />,
     children: [
+      // Printable pages: signed in, but without the rail.
+      { path: 'shortlists/:id/dossier', lazy: () => import('./routes/shortlist-dossier').then((m) => ({ Component: m.ShortlistDossierRoute })) },
       {
         element: <AppShell />,
         errorElement: <RouteError />,

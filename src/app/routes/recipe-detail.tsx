@@ -17,6 +17,9 @@ import { DerivedPanel } from '@/features/recipes/components/derived-panel';
 import { ObservationTimeline } from '@/features/recipes/components/observation-timeline';
 import { RecipeComposition } from '@/features/recipes/components/recipe-composition';
 import { useRecipeMap } from '@/features/recipes/hooks/use-recipe-map';
+import { useMapPoints } from '@/features/map/api/get-map-points';
+import { nearbyEvidence } from '@/features/recipes/components/nearby-evidence';
+import { ShelfLifePanel } from '@/features/recipes/components/shelf-life-panel';
 
 export function RecipeDetailRoute() {
   const { code = '' } = useParams();
@@ -25,6 +28,7 @@ export function RecipeDetailRoute() {
   const observations = useRecipeObservations(recipe.data?.id);
   const map = useRecipeMap(recipe.data);
   const archive = useArchiveRecipe();
+  const points = useMapPoints(recipe.data?.programmeId);
   if (recipe.isPending) return <Loading label="Loading the recipe…" />;
   if (recipe.isError) return recipe.error instanceof ApiError && recipe.error.status === 404 ? <Notice tone="warning" title={`No recipe has the code ${code}`}>Check the code, or <Link to="/find">search for it</Link>.</Notice> : <ErrorState error={recipe.error} retry={() => recipe.refetch()} />;
   const r = recipe.data;
@@ -62,6 +66,9 @@ export function RecipeDetailRoute() {
         <div className="flex flex-col gap-5">
           <Card title="Where it sits">
             <DerivedPanel derived={r.derived} />
+          </Card>
+          <Card title="Shelf life">
+            <ShelfLifePanel derived={r.derived} evidence={points.data ? nearbyEvidence(r.id, r.derived, points.data) : null} />
           </Card>
           <Card title="Bench outcomes by age">
             {observations.isPending ? <Loading /> : observations.isError ? <ErrorState error={observations.error} /> : <ObservationTimeline observations={observations.data} />}

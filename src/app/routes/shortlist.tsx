@@ -3,6 +3,8 @@ import { EmptyState } from '@/components/ui/states';
 import { useSession } from '@/features/auth/api/get-session';
 import { withProgramme } from '@/features/programmes';
 import { ShortlistDetail } from '@/features/shortlists/components/shortlist-detail';
+import { RecipesMap } from '@/features/map/components/recipes-map';
+import { Link } from 'react-router-dom';
 
 export function ShortlistRoute() {
   const { data: user } = useSession();
@@ -18,7 +20,14 @@ export function ShortlistRoute() {
       user={user}
       listHref={(programmeId) => withProgramme('/shortlists', programmeId)}
       onArchived={(shortlist) => navigate(withProgramme('/shortlists', shortlist.programmeId), { state: { notice: `Archived “${shortlist.title}”. It stays on record.` } })}
-      // The map of the shortlist's recipes mounts here: mapSlot={(shortlist) => <map of shortlist.items for shortlist.programmeId />}
+      mapSlot={(shortlist) => (
+        <div className="flex flex-col gap-2">
+          <RecipesMap recipes={shortlist.items.map((i) => i.recipe)} title={`shortlist “${shortlist.title}”`} height={380} />
+          <p className="text-sm">
+            <Link to={`/shortlists/${shortlist.id}/dossier`}>Open the printable dossier</Link> — map, parameters, bench evidence, history and cautions on paper or as PDF.
+          </p>
+        </div>
+      )}
     />
   );
 }

@@ -1,0 +1,68 @@
+import { useMemo } from 'react';
+import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
+import type { MapModel } from '@shared/physics/map/types';
+import { cachedStateMap } from '@shared/state-map-cache';
+import type { RecipeDerived } from '@shared/views/team-data';
+import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
+import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
+import type { MapPoint } from '../geometry/types';
+import { axisTop } from '../hooks/use-map-drawing';
+import { StateMap } from './state-map';
+
+const LAYERS = new Set<Layer>(DEFAULT_LAYERS);
+const NONE = new Set<string>();
+
+/** The map a group of recipes shares: the free-volume map at their median q, else the generic B2* map. */
+function sharedModel(recipes: { derived: RecipeDerived }[]): MapModel {
+  const ratios = recipes.map((r) => r.derived.sizeRatio).filter((q): q is number => q !== null && q > 0).sort((a, b) => a - b);
+  if (ratios.length && ratios.length === recipes.length) return { kind: 'depletion', q: Number(ratios[Math.floor(ratios.length / 2)].toPrecision(3)) };
+  return { kind: 'generic', theory: 'meanField', axis: 'b2' };
+}
+
+/**
+ * Several recipes (a shortlist) on one state map, each labelled by its code in the hover card.
+ * The map reaches up to the strongest of them.
+ */
+export function RecipesMap({ recipes, height = 420, title }: { recipes: { code: string; name: string; derived: RecipeDerived }[]; height?: number; title: string }) {
+  const built = useMemo(() => {
+    if (recipes.length === 0) return null;
+    const model = sharedModel(recipes);
+    const b2s = recipes.map((r) => r.derived.reducedB2).filter((v): v is number => v !== null);
+    const polymers = recipes.map((r) => r.derived.polymerReservoir).filter((v): v is number => v !== null);
+    const yMax = axisTop(model, { reducedB2: b2s.length ? Math.min(...b2s) : null, polymerReservoir: polymers.length ? Math.max(...polymers) : null });
+    const map = cachedStateMap(model, { yMax });
+    const points: MapPoint[] = [];
+    for (const [index, r] of recipes.entries()) {
+      const d = r.derived;
+      try {
+        const y =
+          model.kind === 'depletion' && d.polymerReservoir !== null && d.sizeRatio !== null
+            ? attractionToMapY(map, { kind: 'depletion', q: d.sizeRatio, polymerReservoir: d.polymerReservoir })
+            : d.reducedB2 !== null
+              ? attractionToMapY(map, { kind: 'b2', value: d.reducedB2 })
+              : null;
+        if (y === null) continue;
+        points.push({ key: r.code, kind: 'recipe', id: index, x: d.phi, y: drawnY(map, y), state: d.predictedState ?? 'unclear', predicted: d.predictedState, agrees: null, code: r.code, name: r.name, ageDays: null, recipeId: null, margin: d.margin });
+      } catch {
+        /* a recipe without a place on this map is listed, not drawn */
+      }
+    }
+    return { drawing: drawingFromStateMap(map), points };
+  }, [recipes]);
+  if (!built) return null;
+  return (
+    <StateMap
+      drawing={built.drawing}
+      points={built.points}
+      layers={LAYERS}
+      zoom={null}
+      onZoomChange={() => {}}
+      selected={NONE}
+      onSelect={() => {}}
+      onOpen={() => {}}
+      height={height}
+      interactive={false}
+      ariaLabel={`State map of ${title}: ${built.drawing.modelLabel}; ${built.points.length} recipes`}
+    />
+  );
+}

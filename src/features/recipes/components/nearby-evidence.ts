@@ -1,0 +1,41 @@
+import type { MapPoints, RecipeDerived } from '@shared/views/team-data';
+
+export interface NearbyEvidence {
+  recipes: number;
+  collapsed: { code: string; ageDays: number }[];
+  /** Gel observations at 30 days or older that had not collapsed. */
+  heldGels: number;
+}
+
+/** How close "nearby" is: within this much φ, and within this much B2* (or 20 % of it). */
+export const NEARBY = { phi: 0.06, b2: 1.5, b2Relative: 0.2 };
+
+/**
+ * The team's own ageing evidence near a recipe: observations of other recipes of the programme
+ * within NEARBY of its φ and B2* (the map's universal attraction coordinate). A nearness rule
+ * of our own, stated on screen; not a published criterion.
+ */
+export function nearbyEvidence(recipeId: number, derived: RecipeDerived, data: MapPoints): NearbyEvidence {
+  const r = data.recipes.columns;
+  const o = data.observations.columns;
+  const near = new Set<number>();
+  for (const row of data.recipes.rows) {
+    const id = row[r.indexOf('id')] as number;
+    const phi = row[r.indexOf('phi')] as number | null;
+    const b2 = row[r.indexOf('reducedB2')] as number | null;
+    if (id === recipeId || phi === null || b2 === null || derived.reducedB2 === null) continue;
+    const b2Window = Math.max(NEARBY.b2, Math.abs(derived.reducedB2) * NEARBY.b2Relative);
+    if (Math.abs(phi - derived.phi) <= NEARBY.phi && Math.abs(b2 - derived.reducedB2) <= b2Window) near.add(id);
+  }
+  const collapsed: NearbyEvidence['collapsed'] = [];
+  let heldGels = 0;
+  for (const row of data.observations.rows) {
+    const recipe = row[o.indexOf('recipeId')] as number | null;
+    if (recipe === null || !near.has(recipe)) continue;
+    const state = row[o.indexOf('observedState')];
+    const age = row[o.indexOf('ageDays')] as number;
+    if (state === 'collapsed') collapsed.push({ code: row[o.indexOf('recipeCode')] as string, ageDays: age });
+    if (state === 'gel' && age >= 30) heldGels++;
+  }
+  return { recipes: near.size, collapsed: collapsed.sort((a, b) => a.ageDays - b.ageDays), heldGels };
+}
