@@ -53,6 +53,9 @@ function buildUnlocked(root: string, outDir: string) {
   const result = spawnSync(join(root, 'node_modules', '.bin', 'vite'), ['build', '--outDir', outDir, '--emptyOutDir', '--logLevel', 'warn'], {
     cwd: root,
     stdio: ['ignore', 'inherit', 'inherit'],
+    // Always a production build: Vite would otherwise follow NODE_ENV (test during npm test)
+    // and ship React's development build.
+    env: { ...process.env, NODE_ENV: 'production' },
   });
   if (result.status !== 0) throw new Error('vite build failed; see the messages above');
   writeFileSync(stamp, wanted + '\n');

@@ -1,17 +1,19 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { Loading } from '@/components/ui/states';
 import { AppShell } from './layout/app-shell';
 import { RequireSession } from './layout/require-session';
 import { RouteError } from './routes/route-error';
 
 /** Routes are split: each screen's code loads when it is first opened. */
 const router = createBrowserRouter([
-  { path: '/sign-in', lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })) },
-  { path: '/forgot-password', lazy: () => import('./routes/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })) },
-  { path: '/reset-password', lazy: () => import('./routes/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })) },
-  { path: '/accept-invitation', lazy: () => import('./routes/accept-invitation').then((m) => ({ Component: m.AcceptInvitationRoute })) },
+  { path: '/sign-in', hydrateFallbackElement: <Loading />, lazy: () => import('./routes/sign-in').then((m) => ({ Component: m.SignInRoute })) },
+  { path: '/forgot-password', hydrateFallbackElement: <Loading />, lazy: () => import('./routes/forgot-password').then((m) => ({ Component: m.ForgotPasswordRoute })) },
+  { path: '/reset-password', hydrateFallbackElement: <Loading />, lazy: () => import('./routes/reset-password').then((m) => ({ Component: m.ResetPasswordRoute })) },
+  { path: '/accept-invitation', hydrateFallbackElement: <Loading />, lazy: () => import('./routes/accept-invitation').then((m) => ({ Component: m.AcceptInvitationRoute })) },
   {
     element: <RequireSession />,
     errorElement: <RouteError />,
+    hydrateFallbackElement: <Loading />,
     children: [
       // Printable pages: signed in, but without the rail.
       { path: 'shortlists/:id/dossier', lazy: () => import('./routes/shortlist-dossier').then((m) => ({ Component: m.ShortlistDossierRoute })) },

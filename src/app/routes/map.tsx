@@ -11,6 +11,7 @@ import { MapControls } from '@/features/map/components/map-controls';
 import { MapExports } from '@/features/map/components/map-exports';
 import { MapLegend } from '@/features/map/components/map-legend';
 import { SelectionPanel } from '@/features/map/components/selection-panel';
+import { PointsTable } from '@/features/map/components/points-table';
 import { StateMap } from '@/features/map/components/state-map';
 import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '@/features/map/geometry/map-view';
 import type { MapPoint, Viewport } from '@/features/map/geometry/types';
@@ -139,6 +140,7 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
           </Card>
         </div>
       </div>
+      <PointsTable points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} />
       <SafetyNote compact />
     </div>
   );

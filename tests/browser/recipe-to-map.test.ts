@@ -1,0 +1,102 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser } from 'playwright-core';
+import { STATE_LABELS } from '../../shared/states';
+import { seriousAccessibilityViolations } from '../support/axe';
+import { buildUser } from '../support/builders';
+import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { buildLibrary, buildProgramme } from '../support/team-builders';
+import { startTestStack, type TestStack } from '../support/test-stack';
+import { Recipe } from '../../server/models';
+
+let stack: TestStack;
+let browser: Browser;
+beforeAll(async () => {
+  stack = await startTestStack({ listen: true });
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await stack?.close();
+});
+
+describe('from a new recipe to the map', () => {
+  it('a formulator composes a recipe with a live prediction, saves it, and finds it on the map with its predicted state', async () => {
+    const lib = await buildLibrary();
+    const programme = await buildProgramme({ name: 'Map walk programme' });
+    const formulator = await buildUser({ role: 'formulator' });
+    const { page, context, unexpected } = await openCheckedPage(browser);
+    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
+    await page.goto(`${stack.url}/recipes/new?programme=${programme.id}`);
+    const form = page.getByRole('form', { name: 'Recipe' });
+    await form.getByLabel('Name').fill('Walk-through gel');
+    await form.getByLabel('Particle system').selectOption({ label: `${lib.particle.name} (radius ${lib.particle.radiusNm} nm)` });
+    await form.getByLabel('Solvent').selectOption({ label: lib.solvent.name });
+    await form.getByLabel('Fraction (0 to 0.74)').fill('0.25');
+    await form.getByText('Non-adsorbing polymer (depletion)').click();
+    await form.getByLabel('Polymer (depletant)').selectOption({ label: lib.depletant.name });
+    await form.getByLabel('Polymer concentration (g per litre of solvent)').fill('9');
+    const live = page.getByTestId('live-derivation');
+    await live.waitFor();
+    const livePrediction = (await live.getByText(/^Predicted:/).locator('..').textContent()) ?? '';
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await screenshot(page, 'recipe-new-live');
+    await form.getByRole('button', { name: `Create in ${programme.name}` }).click();
+    await page.waitForURL(/\/recipes\/[A-Z]+-\d{4}$/);
+    const code = page.url().split('/').pop()!;
+    const stored = await Recipe.findOne({ where: { code } });
+    const predicted = STATE_LABELS[stored!.predictedState!];
+    // The browser's live prediction and the server's stored one agree.
+    expect(livePrediction).toContain(predicted);
+    await page.getByText(`Predicted ${predicted}`).first().waitFor();
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await screenshot(page, 'recipe-detail');
+
+    await page.getByRole('link', { name: 'On the programme map' }).click();
+    await page.waitForURL(/\/map\?programme=/);
+    await page.getByRole('img', { name: /^State map of Map walk programme/ }).waitFor();
+    await page.getByText(/^List the \d+ points? on this map$/).click();
+    const row = page.locator(`tr[data-point="r${stored!.id}"]`);
+    await expect.poll(() => row.textContent()).toContain(predicted);
+    expect(await row.textContent()).toContain(code);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await screenshot(page, 'map-with-new-recipe');
+    expect(unexpected()).toEqual([]);
+    await context.close();
+  });
+
+  it("restores the map's view from its URL: axis, theory, layers and zoom", async () => {
+    const lib = await buildLibrary();
+    const programme = await buildProgramme({ name: 'URL view programme', attractionSource: 'salt' });
+    const viewer = await buildUser({ role: 'viewer' });
+    void lib;
+    const first = await openCheckedPage(browser);
+    await signInThroughForm(first.page, stack.url, viewer.email, viewer.password);
+    await first.page.goto(`${stack.url}/map?programme=${programme.id}`);
+    await first.page.getByRole('img', { name: /^State map of URL view programme/ }).waitFor();
+    await first.page.getByLabel('Attraction axis').selectOption('inverseTau');
+    await first.page.getByLabel('Fluid–fluid theory').selectOption('baxterPY');
+    // The layer switches live in the URL, which the router updates a moment after the click.
+    await first.page.getByLabel('Shaded regions').click();
+    await expect.poll(() => first.page.getByLabel('Shaded regions').isChecked()).toBe(false);
+    await first.page.getByRole('button', { name: 'Zoom in' }).click();
+    await first.page.waitForURL(/zoom=/);
+    const url = first.page.url();
+    const label = await first.page.getByRole('img', { name: /^State map/ }).getAttribute('aria-label');
+    const ticks = await first.page.locator('[data-testid="state-map"] text').allTextContents();
+    await first.context.close();
+
+    const second = await openCheckedPage(browser);
+    await signInThroughForm(second.page, stack.url, viewer.email, viewer.password);
+    await second.page.goto(url);
+    await second.page.getByRole('img', { name: /^State map/ }).waitFor();
+    expect(await second.page.getByLabel('Attraction axis').inputValue()).toBe('inverseTau');
+    expect(await second.page.getByLabel('Fluid–fluid theory').inputValue()).toBe('baxterPY');
+    expect(await second.page.getByLabel('Shaded regions').isChecked()).toBe(false);
+    expect(await second.page.getByRole('img', { name: /^State map/ }).getAttribute('aria-label')).toBe(label);
+    expect(await second.page.locator('[data-testid="state-map"] text').allTextContents()).toEqual(ticks);
+    expect(await second.page.locator('[data-region]').count()).toBe(0);
+    await screenshot(second.page, 'map-restored-from-url');
+    expect(second.unexpected()).toEqual([]);
+    await second.context.close();
+  });
+});
