@@ -1,0 +1,45 @@
+import { bisect } from 'simple-statistics';
+import { classifyPoint, type StateMap } from '../physics';
+import type { GelOnset } from './types';
+
+/** Strongest attraction searched (B2*); above a map's top its domes keep their top width. */
+export const ONSET_SEARCH_LOWEST_B2 = -50;
+/** B2* to which each onset is located. */
+export const ONSET_TOLERANCE = 1e-7;
+
+/**
+ * Where a sample at volume fraction φ, moving toward stronger attraction at fixed φ, enters the
+ * spinodal and the binodal of the map's theory — the two lines Gelwright's gel rule is built on
+ * (physics.md §5) — as B2* of the theory frame (no attraction shift).
+ *
+ * Method: bisection (simple-statistics `bisect`) on the state classifyPoint gives at B2*, with the
+ * rule's own thresholds set so that only one line counts: gelB2Threshold = −100 makes "gel" mean
+ * "inside the spinodal"; gelB2Threshold = 1 makes it mean "inside the binodal". Both domes widen
+ * monotonically toward stronger attraction in the mean-field, Percus–Yevick and free-volume
+ * theories, so each state switches once along the search, between B2* = 1 and −50.
+ *
+ * @returns `{ spinodalB2, binodalB2 }`, each null when φ is outside that dome even at the
+ *   strongest attraction searched, or at or above the glass line φ ≥ glassPhi (no gel there).
+ * @example gelOnset(meanFieldMap, 0.13).spinodalB2 // ≈ −1.65, the mean-field critical point
+ */
+export function gelOnset(map: StateMap, phi: number): GelOnset {
+  if (!(phi > 0) || phi >= map.parameters.glassPhi) return { spinodalB2: null, binodalB2: null };
+  return { spinodalB2: entry(map, phi, -100), binodalB2: entry(map, phi, 1) };
+}
+
+function entry(map: StateMap, phi: number, gelB2Threshold: number): number | null {
+  const parameters = { attractionShift: 0, gelB2Threshold };
+  const seen = new Map<number, number>();
+  // +1 on the gel side, −1 off it; remembered, because bisect asks for some values twice.
+  const side = (b2: number) => {
+    let value = seen.get(b2);
+    if (value === undefined) {
+      value = classifyPoint(map, { phi, attraction: { kind: 'b2', value: b2 } }, parameters).state === 'gel' ? 1 : -1;
+      seen.set(b2, value);
+    }
+    return value;
+  };
+  if (side(ONSET_SEARCH_LOWEST_B2) < 0) return null;
+  if (side(1) > 0) return 1;
+  return bisect(side, ONSET_SEARCH_LOWEST_B2, 1, 200, ONSET_TOLERANCE);
+}
