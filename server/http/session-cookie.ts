@@ -1,3 +1,4 @@
+import { createSecretKey, type KeyObject } from 'node:crypto';
 import jwt from 'jsonwebtoken';
 import type { Request, Response } from 'express';
 import type { Config } from '../config';
@@ -8,13 +9,25 @@ const ISSUER = 'gelwright';
 /** Only this algorithm is accepted: tokens claiming `none` or another one are refused. */
 const ALGORITHMS: jwt.Algorithm[] = ['HS256'];
 
+const keys = new Map<string, KeyObject>();
+
+/** The HMAC key as a KeyObject, made once: jsonwebtoken would otherwise make one per call. */
+function keyOf(secret: string): KeyObject {
+  let key = keys.get(secret);
+  if (!key) {
+    key = createSecretKey(Buffer.from(secret, 'utf8'));
+    keys.set(secret, key);
+  }
+  return key;
+}
+
 export interface SessionClaims {
   sub: string;
   role: Role;
 }
 
 export function signSession(config: Config, user: { id: number; role: Role }): string {
-  return jwt.sign({ role: user.role }, config.SESSION_SECRET, {
+  return jwt.sign({ role: user.role }, keyOf(config.SESSION_SECRET), {
     algorithm: 'HS256',
     subject: String(user.id),
     issuer: ISSUER,
@@ -26,7 +39,7 @@ export function signSession(config: Config, user: { id: number; role: Role }): s
 export function verifySession(config: Config, token: string | undefined): SessionClaims | null {
   if (!token) return null;
   try {
-    const claims = jwt.verify(token, config.SESSION_SECRET, { algorithms: ALGORITHMS, issuer: ISSUER });
+    const claims = jwt.verify(token, keyOf(config.SESSION_SECRET), { algorithms: ALGORITHMS, issuer: ISSUER });
     if (typeof claims === 'string' || typeof claims.sub !== 'string') return null;
     return { sub: claims.sub, role: claims.role as Role };
   } catch {

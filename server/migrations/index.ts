@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-users-and-audit';
 import * as m0002 from './0002-team-data';
+import * as m0005 from './0005-programme-change-indexes';
 
 export interface Migration {
   name: string;
@@ -12,4 +13,5 @@ export interface Migration {
 export const MIGRATIONS: Migration[] = [
   { name: '0001-users-and-audit', ...m0001 },
   { name: '0002-team-data', ...m0002 },
+  { name: '0005-programme-change-indexes', ...m0005 },
 ];

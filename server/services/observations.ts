@@ -46,17 +46,20 @@ async function resolveSubject(ctx: Ctx, input: ObservationInput) {
     const recipe = await Recipe.findByPk(input.recipeId, { transaction: ctx.transaction });
     if (!recipe) throw badRequest('recipeId: no such recipe', 'recipeId');
     if (recipe.archivedAt) throw badRequest(`recipeId: recipe ${recipe.code} is archived`, 'recipeId');
-    return { programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null };
+    return { recipe, fields: { programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null } };
   }
   const adhoc = input.adhoc!;
   await requireProgramme(adhoc.programmeId, ctx.transaction);
   return {
-    programmeId: adhoc.programmeId,
-    recipeId: null,
-    adhocPhi: adhoc.phi,
-    adhocReducedB2: adhoc.reducedB2,
-    adhocDescription: adhoc.description ?? null,
-    adhocPredictedState: await predictAdhoc(adhoc.programmeId, adhoc.phi, adhoc.reducedB2, ctx.transaction),
+    recipe: null,
+    fields: {
+      programmeId: adhoc.programmeId,
+      recipeId: null,
+      adhocPhi: adhoc.phi,
+      adhocReducedB2: adhoc.reducedB2,
+      adhocDescription: adhoc.description ?? null,
+      adhocPredictedState: await predictAdhoc(adhoc.programmeId, adhoc.phi, adhoc.reducedB2, ctx.transaction),
+    },
   };
 }
 
@@ -74,10 +77,11 @@ function measured(input: ObservationInput) {
 }
 
 export async function createObservation(ctx: Ctx, input: ObservationInput) {
-  const subject = await resolveSubject(ctx, input);
-  const observation = await Observation.create({ ...subject, ...measured(input), observerId: ctx.user!.id, importBatchId: null }, { transaction: ctx.transaction });
-  await ctx.audit({ action: 'observation.created', entityType: 'observation', entityId: observation.id, details: { recipeId: subject.recipeId, state: input.observedState } });
-  return loadObservation(observation.id, ctx.transaction);
+  const { recipe, fields } = await resolveSubject(ctx, input);
+  const observation = await Observation.create({ ...fields, ...measured(input), observerId: ctx.user!.id, importBatchId: null }, { transaction: ctx.transaction });
+  await ctx.audit({ action: 'observation.created', entityType: 'observation', entityId: observation.id, details: { recipeId: fields.recipeId, state: input.observedState } });
+  // Everything the answer shows is at hand: no need to read the new row back with its joins.
+  return Object.assign(observation, { recipe, observer: ctx.user, attachments: [] }) as Awaited<ReturnType<typeof loadObservation>>;
 }
 
 /** A bench record is changed by the person who observed it, or an administrator. */
@@ -90,8 +94,8 @@ export async function lockOwnObservation(ctx: Ctx, id: number) {
 
 export async function updateObservation(ctx: Ctx, id: number, input: ObservationInput) {
   const observation = await lockOwnObservation(ctx, id);
-  const subject = await resolveSubject(ctx, input);
-  observation.set({ ...subject, ...measured(input) });
+  const { fields } = await resolveSubject(ctx, input);
+  observation.set({ ...fields, ...measured(input) });
   const changed = observation.changed() || [];
   await observation.save({ transaction: ctx.transaction });
   await ctx.audit({ action: 'observation.updated', entityType: 'observation', entityId: id, details: { changed } });

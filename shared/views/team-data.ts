@@ -193,8 +193,10 @@ export interface ShortlistView {
 }
 
 /**
- * Map overlay for a programme, columnar so 10,000 points stay small. Each point carries its
- * coordinates in every attraction description the map can show; null where not defined.
+ * Map overlay for a programme, columnar so 10,000 points stay small. Recipes carry their
+ * coordinates in every attraction description the map can show (null where not defined);
+ * an observation of a recipe leaves its coordinates null (it sits where its recipe sits), and
+ * only ad-hoc observations carry their own φ, B2* and 1/τ.
  */
 export interface MapPoints {
   programmeId: number;

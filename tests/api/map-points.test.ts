@@ -26,10 +26,32 @@ describe('GET /api/map-points', () => {
     const { recipes, observations } = response.body;
     expect(recipes.rows).toHaveLength(1);
     const r = Object.fromEntries(recipes.columns.map((c: string, i: number) => [c, recipes.rows[0][i]]));
-    expect(r).toMatchObject({ id: kept.id, code: kept.code, phi: kept.derived.phi, reducedB2: kept.derived.reducedB2, predictedState: kept.derived.predictedState });
-    expect(r.polymerReservoir).toBeCloseTo(kept.derived.polymerReservoir, 12);
+    expect(r).toMatchObject({ id: kept.id, code: kept.code, predictedState: kept.derived.predictedState });
+    // Coordinates to six significant digits.
+    expect(r.phi).toBeCloseTo(kept.derived.phi, 5);
+    expect(r.reducedB2 / kept.derived.reducedB2).toBeCloseTo(1, 5);
+    expect(r.polymerReservoir / kept.derived.polymerReservoir).toBeCloseTo(1, 5);
     const o = Object.fromEntries(observations.columns.map((c: string, i: number) => [c, observations.rows[0][i]]));
-    expect(o).toMatchObject({ id: obs.id, recipeId: kept.id, phi: kept.derived.phi, observedState: 'gel', ageDays: 3, recipeCode: kept.code });
+    // An observation of a recipe leaves its coordinates to the recipe's row.
+    expect(o).toMatchObject({ id: obs.id, recipeId: kept.id, phi: null, reducedB2: null, observedState: 'gel', ageDays: 3, recipeCode: kept.code });
+  });
+
+  it('serves the same answer compressed, and a 304 to a client that has it already', async () => {
+    const lib = await buildLibrary();
+    const programme = await buildProgramme();
+    const formulator = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+    await formulator.post('/api/recipes').send(recipeInput(programme, lib));
+    const plain = await formulator.get(`/api/map-points?programme=${programme.id}`).set('Accept-Encoding', 'identity');
+    const zipped = await formulator.get(`/api/map-points?programme=${programme.id}`).set('Accept-Encoding', 'gzip');
+    expect(zipped.headers['content-encoding']).toBe('gzip');
+    expect(zipped.body).toEqual(plain.body);
+    const again = await formulator.get(`/api/map-points?programme=${programme.id}`).set('If-None-Match', plain.headers.etag);
+    expect(again.status).toBe(304);
+    // A new recipe changes the answer at once.
+    await formulator.post('/api/recipes').send(recipeInput(programme, lib));
+    const changed = await formulator.get(`/api/map-points?programme=${programme.id}`).set('If-None-Match', plain.headers.etag);
+    expect(changed.status).toBe(200);
+    expect(changed.body.recipes.rows).toHaveLength(2);
   });
 
   it('answers an unknown programme with 400 naming the field', async () => {

@@ -1,4 +1,4 @@
-import { useCallback, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useNavigate, useSearchParams } from 'react-router-dom';
 import { can } from '@shared/permissions';
 import { Card, PageHeader } from '@/components/ui/page';
@@ -74,6 +74,8 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
     const polymers = numbers(polymer);
     return { reducedB2: b2s.length ? Math.min(...b2s) : null, polymerReservoir: polymers.length ? Math.max(...polymers) : null };
   }, [data]);
+  const layersKey = [...view.layers].sort().join(',');
+  const layers = useMemo(() => view.layers, [layersKey]);
   const built = useStateMapDrawing({ view, sizeRatio, strongest });
   const [selected, setSelected] = useState<MapPoint[]>([]);
   // The export buttons need the elements themselves, so keep them in state (a ref would not re-render).
@@ -81,13 +83,26 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
   const canvasRef = useRef<HTMLCanvasElement>(null);
   const placed = useMemo(() => (built.map ? placePoints(built.map, data, { minAge: view.minAge, maxAge: view.maxAge }) : { points: [], skipped: 0 }), [built.map, data, view.minAge, view.maxAge]);
   const visible = useMemo(
-    () => placed.points.filter((p) => (p.kind === 'recipe' ? view.layers.has('recipes') : view.layers.has('observations'))),
-    [placed.points, view.layers],
+    () => placed.points.filter((p) => (p.kind === 'recipe' ? layers.has('recipes') : layers.has('observations'))),
+    [placed.points, layers],
   );
   const selectedKeys = useMemo(() => new Set(selected.map((p) => p.key)), [selected]);
-  // Zoom events arrive many per second: update from the latest URL, not this render's view.
+  // Zoom events arrive many per second while panning: the figure follows them at once, and the
+  // URL (which re-renders the whole screen) is written once the movement settles.
+  const zoomKey = JSON.stringify(view.zoom);
+  const [liveZoom, setLiveZoom] = useState<Viewport | null>(view.zoom);
+  useEffect(() => setLiveZoom(view.zoom), [zoomKey]);
+  const pendingZoom = useRef<ReturnType<typeof setTimeout> | null>(null);
+  useEffect(() => () => void (pendingZoom.current && clearTimeout(pendingZoom.current)), []);
   const onZoomChange = useCallback(
-    (zoom: Viewport | null) => setParams((previous) => writeMapView(previous, { ...parseMapView(previous, depletion ? 'polymerReservoir' : 'b2'), zoom }), { replace: true }),
+    (zoom: Viewport | null) => {
+      setLiveZoom(zoom);
+      if (pendingZoom.current) clearTimeout(pendingZoom.current);
+      pendingZoom.current = setTimeout(
+        () => setParams((previous) => writeMapView(previous, { ...parseMapView(previous, depletion ? 'polymerReservoir' : 'b2'), zoom }), { replace: true }),
+        250,
+      );
+    },
     [setParams, depletion],
   );
   const onOpen = useCallback((p: MapPoint) => p.code && navigate(`/recipes/${p.code}`), [navigate]);
@@ -115,8 +130,8 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
           <StateMap
             drawing={drawing}
             points={visible}
-            layers={view.layers}
-            zoom={view.zoom}
+            layers={layers}
+            zoom={liveZoom}
             onZoomChange={onZoomChange}
             selected={selectedKeys}
             onSelect={setSelected}

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { STATE_LABELS } from '@shared/states';
 import { formatNumber } from '@/lib/format';
@@ -10,9 +11,12 @@ const LIMIT = 500;
  * the canvas that draws them cannot be read aloud.
  */
 export function PointsTable({ points, yLabel, displayY }: { points: MapPoint[]; yLabel: string; displayY: (y: number) => number }) {
+  // Rows are only rendered while the list is open: the map redraws far more often than anyone reads it.
+  const [open, setOpen] = useState(false);
   return (
-    <details className="rounded-card border border-line bg-panel px-4 py-3 text-sm">
+    <details className="rounded-card border border-line bg-panel px-4 py-3 text-sm" onToggle={(event) => setOpen((event.target as HTMLDetailsElement).open)}>
       <summary className="cursor-pointer font-medium">List the {points.length} point{points.length === 1 ? '' : 's'} on this map</summary>
+      {open && (
       <div className="mt-3 max-h-96 overflow-auto">
         <table className="w-full border-collapse">
           <caption className="sr-only">Points on the state map</caption>
@@ -43,6 +47,7 @@ export function PointsTable({ points, yLabel, displayY }: { points: MapPoint[]; 
         </table>
         {points.length > LIMIT && <p className="mt-2 text-xs text-ink-soft">The first {LIMIT} are listed; export the points as CSV for all of them.</p>}
       </div>
+      )}
     </details>
   );
 }

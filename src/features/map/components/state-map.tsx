@@ -35,6 +35,9 @@ declare global {
   interface Window {
     /** Paint timings for the benchmark (npm run bench); harmless in normal use. */
     __gelwrightMapPaints?: number[];
+    /** Redraw timings: from a zoom or pan event to just after the frame that shows it. */
+    __gelwrightMapRedraws?: number[];
+    __gelwrightZoomAt?: number;
   }
 }
 
@@ -70,7 +73,21 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
   const baseScales = useMemo(() => mapScales(frame, full), [width, height, full.x[0], full.x[1], full.y[0], full.y[1]]);
   // Regions are traced once per drawing over the whole domain; zooming only re-projects them.
   const regions = useMemo(() => gridRegions(drawing.regionGrid, full), [drawing]);
-  const hits = useMemo(() => createHitIndex(points, scales), [points, scales]);
+  // The hit index (a quadtree of every point in pixels) is built when the pointer first needs it
+  // after the view changed, not on every frame of a pan.
+  const hitCache = useRef<{ points: MapPoint[]; scales: typeof scales; index: ReturnType<typeof createHitIndex> } | null>(null);
+  const hits = useMemo(
+    () => ({
+      index: () => {
+        const cached = hitCache.current;
+        if (cached && cached.points === points && cached.scales === scales) return cached.index;
+        const index = createHitIndex(points, scales);
+        hitCache.current = { points, scales, index };
+        return index;
+      },
+    }),
+    [points, scales],
+  );
 
   // Paint the points whenever they, the view or the selection change.
   useEffect(() => {
@@ -83,6 +100,12 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
     paintPoints(element.getContext('2d')!, points, scales, { selected, highlight: hovered?.point.key ?? null, showMismatches: layers.has('mismatches'), pixelRatio: ratio });
     (window.__gelwrightMapPaints ??= []).push(performance.now() - started);
     if (window.__gelwrightMapPaints.length > 500) window.__gelwrightMapPaints.splice(0, 250);
+    const zoomAt = window.__gelwrightZoomAt;
+    if (zoomAt !== undefined) {
+      window.__gelwrightZoomAt = undefined;
+      // After the next frame: React's commit, the SVG and the canvas are then on screen.
+      requestAnimationFrame(() => setTimeout(() => (window.__gelwrightMapRedraws ??= []).push(performance.now() - zoomAt), 0));
+    }
   }, [points, scales, selected, hovered, layers, canvas]);
 
   // Zoom and pan: d3-zoom's transform rescales the full-domain scales to the visible domain.
@@ -94,6 +117,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
       .extent([[0, 0], [baseScales.inner.width, baseScales.inner.height]])
       .on('zoom', (event: { transform: ZoomTransform; sourceEvent: Event | null }) => {
         if (!event.sourceEvent) return;
+        window.__gelwrightZoomAt ??= performance.now();
         const t = event.transform;
         const next = t.k === 1 && t.x === 0 && t.y === 0 ? null : { x: t.rescaleX(baseScales.x).domain() as [number, number], y: t.rescaleY(baseScales.y).domain() as [number, number] };
         onZoomChange(next);
@@ -125,7 +149,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
       .extent([[0, 0], [scales.inner.width, scales.inner.height]])
       .on('end', (event: { selection: [[number, number], [number, number]] | null }) => {
         if (!event.selection) return;
-        onSelect(hits.within(event.selection));
+        onSelect(hits.index().within(event.selection));
         layer.call(behaviour.move as never, null);
       });
     layer.call(behaviour as never);
@@ -188,14 +212,19 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
             fill="transparent"
             style={{ cursor: hovered ? 'pointer' : interactive ? 'grab' : 'default' }}
             onPointerMove={(event) => {
+              // While a button is held the map is being dragged: no hover card, no hit testing.
+              if (event.buttons !== 0) {
+                if (hovered) setHovered(null);
+                return;
+              }
               const [x, y] = pointerAt(event);
-              const point = hits.nearest(x, y);
-              setHovered(point ? { point, x: scales.x(point.x), y: scales.y(point.y) } : null);
+              const point = hits.index().nearest(x, y);
+              setHovered((current) => (point ? (current?.point === point ? current : { point, x: scales.x(point.x), y: scales.y(point.y) }) : null));
             }}
             onPointerLeave={() => setHovered(null)}
             onClick={(event) => {
               const [x, y] = pointerAt(event);
-              const point = hits.nearest(x, y);
+              const point = hits.index().nearest(x, y);
               if (point) onOpen(point);
             }}
           />

@@ -26,8 +26,16 @@ export function projectPoints(data: MapPoints, yOf: PointY, filter: { minAge: nu
     const predicted = r.predictedState as PredictedState | null;
     points.push({ key: `r${r.id}`, kind: 'recipe', id: r.id as number, x: r.phi as number, y, state: (predicted ?? 'unclear') as ObservedState, predicted, agrees: null, code: r.code as string, name: r.name as string, ageDays: null, recipeId: r.id as number, margin: r.margin as number | null });
   }
+  // Observations of a recipe share its coordinates (the API sends them once, on the recipe).
+  const recipeCoordinates = new Map<number, Record<string, unknown>>();
+  for (const row of data.recipes.rows) {
+    const r = columns(data.recipes.columns, row);
+    recipeCoordinates.set(r.id as number, r);
+  }
   for (const row of data.observations.rows) {
-    const o = columns(data.observations.columns, row);
+    const listed = columns(data.observations.columns, row);
+    const from = listed.recipeId !== null ? recipeCoordinates.get(listed.recipeId as number) : undefined;
+    const o = from ? { ...listed, phi: from.phi, reducedB2: from.reducedB2, inverseTau: from.inverseTau, contactEnergyKT: from.contactEnergyKT, polymerReservoir: from.polymerReservoir } : listed;
     const age = o.ageDays as number;
     if ((filter.minAge !== null && age < filter.minAge) || (filter.maxAge !== null && age > filter.maxAge)) continue;
     const y = yOf(o as never, o.recipeId as number | null);

@@ -1,0 +1,84 @@
+import { gzipSync } from 'node:zlib';
+import { createHash } from 'node:crypto';
+import { QueryTypes, type Sequelize } from 'sequelize';
+import { observationAgrees, type ObservedState, type PredictedState } from '../../shared/states';
+import type { MapPoints, RecipeDerived } from '../../shared/views/team-data';
+
+const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : 4 * (1 - b2));
+/** Six significant digits: far finer than any map can show, and a third of the bytes. */
+const short = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(6)));
+
+/** Everything the map overlays for a programme, read with two plain queries (no model objects). */
+export async function buildMapPoints(sequelize: Sequelize, programmeId: number): Promise<MapPoints> {
+  const recipes = await sequelize.query<{ id: number; code: string; name: string; derived: string | RecipeDerived }>(
+    'SELECT id, code, name, derived FROM recipes WHERE programme_id = ? AND archived_at IS NULL ORDER BY id',
+    { replacements: [programmeId], type: QueryTypes.SELECT },
+  );
+  const recipeRows = recipes.map((r) => {
+    const d = (typeof r.derived === 'string' ? JSON.parse(r.derived) : r.derived) as RecipeDerived;
+    return [r.id, r.code, r.name, short(d.phi), short(d.reducedB2), short(d.stickiness ? 1 / d.stickiness : inverseTauFromB2(d.reducedB2)), short(d.contactEnergyKT), short(d.polymerReservoir), short(d.sizeRatio), d.predictedState, short(d.margin)];
+  });
+  const observations = await sequelize.query<{
+    id: number; recipe_id: number | null; code: string | null; adhoc_phi: number | null; adhoc_reduced_b2: number | null; adhoc_predicted_state: PredictedState | null;
+    observed_state: ObservedState; predicted_state: PredictedState | null; age_days: number;
+  }>(
+    `SELECT o.id, o.recipe_id, r.code, o.adhoc_phi, o.adhoc_reduced_b2, o.adhoc_predicted_state, o.observed_state, r.predicted_state, o.age_days
+       FROM observations o LEFT JOIN recipes r ON r.id = o.recipe_id
+      WHERE o.programme_id = ? AND o.archived_at IS NULL AND (r.id IS NULL OR r.archived_at IS NULL)
+      ORDER BY o.id`,
+    { replacements: [programmeId], type: QueryTypes.SELECT },
+  );
+  // An observation of a recipe sits where its recipe sits: its coordinates are left null and the
+  // client reads them from the recipe's row. Only ad-hoc samples carry their own.
+  const observationRows = observations.map((o) => {
+    const predicted = o.recipe_id !== null ? o.predicted_state : o.adhoc_predicted_state;
+    const own = o.recipe_id === null;
+    return [o.id, o.recipe_id, own ? short(o.adhoc_phi) : null, own ? short(o.adhoc_reduced_b2) : null, own ? short(inverseTauFromB2(o.adhoc_reduced_b2)) : null, null, null, o.observed_state, predicted, observationAgrees(o.observed_state, predicted), o.age_days, o.code];
+  });
+  return {
+    programmeId,
+    recipes: { columns: ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'], rows: recipeRows },
+    observations: { columns: ['id', 'recipeId', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'observedState', 'predictedState', 'agrees', 'ageDays', 'recipeCode'], rows: observationRows },
+  };
+}
+
+/**
+ * What changed last in a programme: the newest id and update time of its recipes and
+ * observations (four index lookups). Rows are never deleted, so any insert or update moves it.
+ * Null when the programme does not exist.
+ */
+async function programmeVersion(sequelize: Sequelize, programmeId: number): Promise<string | null> {
+  const [row] = await sequelize.query<Record<string, unknown>>(
+    `SELECT (SELECT COUNT(*) FROM programmes WHERE id = :p) AS pe,
+            (SELECT MAX(id) FROM recipes WHERE programme_id = :p) AS ri, (SELECT MAX(updated_at) FROM recipes WHERE programme_id = :p) AS ru,
+            (SELECT MAX(id) FROM observations WHERE programme_id = :p) AS oi, (SELECT MAX(updated_at) FROM observations WHERE programme_id = :p) AS ou`,
+    { replacements: { p: programmeId }, type: QueryTypes.SELECT },
+  );
+  return Number(row.pe) === 0 ? null : JSON.stringify(row);
+}
+
+export interface CachedMapPoints {
+  etag: string;
+  json: Buffer;
+  gzip: Buffer;
+}
+
+/** Answers kept at most this long even when nothing seems to have changed (a same-millisecond update). */
+const MAX_AGE_MS = 10_000;
+const cache = new Map<number, CachedMapPoints & { version: string; at: number }>();
+
+/**
+ * The overlay of a programme, built once per change and kept in memory as JSON and gzip, so the
+ * map of a large programme costs a version check rather than 10,000 rows of work per request.
+ */
+export async function cachedMapPoints(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
+  const version = await programmeVersion(sequelize, programmeId);
+  if (version === null) return null;
+  const hit = cache.get(programmeId);
+  if (hit && hit.version === version && Date.now() - hit.at < MAX_AGE_MS) return hit;
+  const json = Buffer.from(JSON.stringify(await buildMapPoints(sequelize, programmeId)));
+  const entry = { version, at: Date.now(), json, gzip: gzipSync(json, { level: 6 }), etag: `"${createHash('sha1').update(json).digest('base64url')}"` };
+  cache.set(programmeId, entry);
+  if (cache.size > 100) cache.delete(cache.keys().next().value!);
+  return entry;
+}
