@@ -35,6 +35,11 @@ function toHttpError(error: unknown): HttpError {
   }
   // Sequelize / MariaDB
   if (isDatabaseUnavailable(e)) return serviceUnavailable();
+  // Two transactions wanted the same rows at once (a deadlock, a lock wait that ran out, or a
+  // Galera certification failure): nothing was written; the client may simply try again.
+  if (e.original?.code === 'ER_LOCK_DEADLOCK' || e.original?.code === 'ER_LOCK_WAIT_TIMEOUT') {
+    return conflict('Someone changed the same record at the same moment; nothing was saved, try again', { retry: true });
+  }
   if (e.name === 'SequelizeUniqueConstraintError') return conflict('A record with these values exists already');
   if (e.name === 'SequelizeValidationError') {
     const first = e.errors?.[0];
