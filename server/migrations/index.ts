@@ -1,6 +1,7 @@
 import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-users-and-audit';
 import * as m0002 from './0002-team-data';
+import * as m0003 from './0003-calibrations';
 import * as m0005 from './0005-programme-change-indexes';
 
 export interface Migration {
@@ -13,5 +14,6 @@ export interface Migration {
 export const MIGRATIONS: Migration[] = [
   { name: '0001-users-and-audit', ...m0001 },
   { name: '0002-team-data', ...m0002 },
+  { name: '0003-calibrations', ...m0003 },
   { name: '0005-programme-change-indexes', ...m0005 },
 ];

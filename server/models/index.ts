@@ -10,10 +10,11 @@ import { Observation } from './observation';
 import { Attachment } from './attachment';
 import { ImportBatch } from './import-batch';
 import { Shortlist, ShortlistItem, ShortlistEvent } from './shortlist';
+import { Calibration } from './calibration';
 
-export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent };
+export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration };
 
-const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent];
+const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration];
 
 /** Binds every model to the process's Sequelize instance and declares the associations. */
 export function initModels(sequelize: Sequelize) {
@@ -36,4 +37,7 @@ export function initModels(sequelize: Sequelize) {
   Shortlist.belongsTo(User, { foreignKey: 'reviewerId', as: 'reviewer' });
   ShortlistItem.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
   ShortlistEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  Calibration.belongsTo(User, { foreignKey: 'fittedBy', as: 'fitter' });
+  Calibration.belongsTo(User, { foreignKey: 'acceptedBy', as: 'acceptor' });
+  Calibration.belongsTo(User, { foreignKey: 'endedBy', as: 'ender' });
 }

@@ -13,6 +13,7 @@ import { observationRoutes } from './observations/router';
 import { attachmentRoutes } from './attachments/router';
 import { shortlistRoutes } from './shortlists/router';
 import { mapPointRoutes } from './map-points/router';
+import { calibrationRoutes } from './calibrations/router';
 
 /**
  * Every API route of the installation. The role-matrix test walks this list, so a route
@@ -34,4 +35,5 @@ export const ALL_ROUTES: RouteSpec[] = [
   ...attachmentRoutes,
   ...shortlistRoutes,
   ...mapPointRoutes,
+  ...calibrationRoutes,
 ];

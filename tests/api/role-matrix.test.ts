@@ -35,6 +35,7 @@ const ALLOW: Record<string, Expectation> = {
   ...observations(),
   ...shortlists(),
   'GET /api/map-points': EVERY_ROLE,
+  ...calibrations(),
 };
 
 function programmes(): Record<string, Expectation> {
@@ -100,6 +101,17 @@ function shortlists(): Record<string, Expectation> {
     'POST /api/shortlists/:id/archive': ['admin', 'formulator'],
     'POST /api/shortlists/:id/approve': ['admin', 'manager'],
     'POST /api/shortlists/:id/return': ['admin', 'manager'],
+  };
+}
+
+/** Anyone who works with the data may fit; managers and admins decide (shared/permissions). */
+function calibrations(): Record<string, Expectation> {
+  return {
+    'GET /api/programmes/:id/calibrations': EVERY_ROLE,
+    'GET /api/programmes/:id/calibrations/:calibrationId': EVERY_ROLE,
+    'POST /api/programmes/:id/calibrations': ['admin', 'manager', 'formulator', 'scientist'],
+    'POST /api/programmes/:id/calibrations/:calibrationId/accept': ['admin', 'manager'],
+    'POST /api/programmes/:id/calibrations/withdraw': ['admin', 'manager'],
   };
 }
 

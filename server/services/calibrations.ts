@@ -1,0 +1,248 @@
+import { Op, type Transaction } from 'sequelize';
+import { CalibrationRefused, fitCalibration, type CalibrationObservation } from '../../shared/calibration';
+import { PHYSICS_MODEL_VERSION, PhysicsArgumentError, type StateMap } from '../../shared/physics';
+import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
+import type { RecipeInput } from '../../shared/schemas/recipes';
+import { cachedStateMap } from '../../shared/state-map-cache';
+import type { PredictionRecompute } from '../../shared/views/calibration';
+import { conflict, HttpError, notFound } from '../errors';
+import type { HandlerContext } from '../http/route';
+import { Calibration, Depletant, Observation, ParticleSystem, Recipe, Salt, Solvent, User } from '../models';
+import { recipeAttraction } from '../presenters/recipe';
+import { requireProgramme } from './lookups';
+import { adhocPrediction, programmeParameters } from './predictions';
+
+type Ctx = HandlerContext<unknown, unknown, unknown>;
+
+const people = () => [
+  { model: User, as: 'fitter', attributes: ['id', 'name'] },
+  { model: User, as: 'acceptor', attributes: ['id', 'name'] },
+  { model: User, as: 'ender', attributes: ['id', 'name'] },
+];
+
+/** A programme's calibrations, newest first. */
+export async function listCalibrations(programmeId: number) {
+  await requireProgramme(programmeId, null, 'param');
+  return Calibration.findAll({ where: { programmeId }, include: people(), order: [['createdAt', 'DESC'], ['id', 'DESC']] });
+}
+
+/** One calibration of the programme, or a 404 (also when it belongs to another programme). */
+export async function loadCalibration(programmeId: number, id: number, transaction: Transaction | null, lock = false) {
+  const calibration = await Calibration.findOne({
+    where: { id, programmeId },
+    include: lock ? [] : people(),
+    transaction,
+    lock: lock && transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  if (!calibration) throw notFound('Calibration');
+  return calibration;
+}
+
+/** The form input of a stored recipe (what deriveRecipe reads). */
+function recipeInputOf(recipe: Recipe): RecipeInput {
+  return {
+    programmeId: recipe.programmeId,
+    name: recipe.name,
+    particleId: recipe.particleId,
+    solventId: recipe.solventId,
+    fraction: { kind: recipe.fractionKind, value: recipe.fractionValue },
+    temperatureC: recipe.temperatureC,
+    attraction: recipeAttraction(recipe),
+    ...(recipe.notes ? { notes: recipe.notes } : {}),
+  };
+}
+
+/** The library rows of many recipes with one query per kind of material. */
+async function materialsOf(recipes: Recipe[], transaction: Transaction | null): Promise<Map<number, RecipeMaterials | null>> {
+  const ids = (pick: (r: Recipe) => number | null) => [...new Set(recipes.map(pick).filter((id): id is number => id !== null))];
+  const byId = async <M extends { id: number }>(model: { findAll(options: object): Promise<M[]> }, list: number[]) =>
+    new Map((list.length ? await model.findAll({ where: { id: { [Op.in]: list } }, transaction }) : []).map((m) => [m.id, m]));
+  const [particles, solvents, depletants, salts] = await Promise.all([
+    byId<ParticleSystem>(ParticleSystem, ids((r) => r.particleId)),
+    byId<Solvent>(Solvent, ids((r) => r.solventId)),
+    byId<Depletant>(Depletant, ids((r) => r.depletantId)),
+    byId<Salt>(Salt, ids((r) => r.saltId)),
+  ]);
+  return new Map(
+    recipes.map((r) => {
+      const particle = particles.get(r.particleId);
+      const solvent = solvents.get(r.solventId);
+      if (!particle || !solvent) return [r.id, null];
+      return [r.id, { particle, solvent, depletant: r.depletantId ? depletants.get(r.depletantId) ?? null : null, salt: r.saltId ? salts.get(r.saltId) ?? null : null }];
+    }),
+  );
+}
+
+/**
+ * The programme's live bench observations as the fit reads them: φ and B2* from the recipe's
+ * stored derivation (or the ad-hoc composition), on the uncalibrated map the recipe is
+ * predicted on (recipeStateMap) or, for ad-hoc compositions, the generic mean-field B2* map.
+ */
+export async function calibrationObservations(programmeId: number, transaction: Transaction | null): Promise<CalibrationObservation[]> {
+  const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, transaction });
+  const materials = await materialsOf(recipes, transaction);
+  const recipeById = new Map(recipes.map((r) => [r.id, r]));
+  const maps = new Map<number, StateMap | null>();
+  for (const recipe of recipes) {
+    const m = materials.get(recipe.id);
+    let map: StateMap | null = null;
+    try {
+      map = m ? recipeStateMap(recipeInputOf(recipe), m) : null;
+    } catch (error) {
+      if (!(error instanceof PhysicsArgumentError)) throw error;
+    }
+    maps.set(recipe.id, map);
+  }
+  const adhocMap = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' });
+  const observations = await Observation.findAll({
+    where: { programmeId, archivedAt: null },
+    attributes: ['id', 'recipeId', 'adhocPhi', 'adhocReducedB2', 'observedState'],
+    order: [['id', 'ASC']],
+    transaction,
+  });
+  const offered: CalibrationObservation[] = [];
+  for (const o of observations) {
+    if (o.recipeId === null) {
+      offered.push({ id: o.id, phi: o.adhocPhi, reducedB2: o.adhocReducedB2, observedState: o.observedState, map: adhocMap });
+      continue;
+    }
+    const recipe = recipeById.get(o.recipeId);
+    if (!recipe) continue; // an archived recipe's observations are not offered
+    offered.push({ id: o.id, phi: recipe.derived.phi, reducedB2: recipe.derived.reducedB2, observedState: o.observedState, map: maps.get(recipe.id) ?? null });
+  }
+  return offered;
+}
+
+/** The 422 a refused fit answers with: what is missing, and the counts. */
+function refusal(error: CalibrationRefused) {
+  return new HttpError(422, 'calibration_refused', error.message, { reason: error.reason, counts: error.counts });
+}
+
+/** Fits a calibration to the programme's bench and stores it as proposed. */
+export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, input: CalibrationFitInput) {
+  const programme = await requireProgramme(programmeId, ctx.transaction, 'param');
+  if (programme.archivedAt) throw conflict('The programme is archived; restore it before calibrating');
+  const observations = await calibrationObservations(programmeId, ctx.transaction);
+  let result;
+  try {
+    result = fitCalibration(observations, { parameters: input.parameters, folds: input.folds });
+  } catch (error) {
+    if (error instanceof CalibrationRefused) throw refusal(error);
+    throw error;
+  }
+  const fit = result.fit;
+  const calibration = await Calibration.create(
+    {
+      programmeId,
+      attractionShift: result.parameters.attractionShift,
+      attractionShiftSe: fit.attractionShift.standardError,
+      gelB2Threshold: result.parameters.gelB2Threshold,
+      gelB2ThresholdSe: fit.gelB2Threshold?.standardError ?? null,
+      observationCount: result.observations.used,
+      cvAccuracyBefore: result.crossValidation.before,
+      cvAccuracyAfter: result.crossValidation.after,
+      method: fit.method,
+      modelVersion: PHYSICS_MODEL_VERSION,
+      result,
+      note: input.note ?? null,
+      fittedBy: ctx.user!.id,
+    },
+    { transaction: ctx.transaction },
+  );
+  await ctx.audit({
+    action: 'calibration.fitted',
+    entityType: 'calibration',
+    entityId: calibration.id,
+    details: { programmeId, attractionShift: result.parameters.attractionShift, gelB2Threshold: result.parameters.gelB2Threshold, fitted: result.fitted, used: result.observations.used, verdict: result.verdict.kind },
+  });
+  return loadCalibration(programmeId, calibration.id, ctx.transaction);
+}
+
+/**
+ * Re-derives every live recipe of the programme and re-predicts its live ad-hoc observations
+ * with the programme's calibration as it now stands in this transaction (programmeParameters).
+ * A recipe that cannot be derived any more stops the whole change (409), so the programme never
+ * holds predictions from two calibrations. Rows are locked for update in id order; the stored
+ * recipe keeps its updatedAt (no one edited it).
+ */
+async function recomputePredictions(ctx: Ctx, programmeId: number): Promise<PredictionRecompute> {
+  const transaction = ctx.transaction!;
+  const { parameters, calibration } = await programmeParameters(programmeId, transaction);
+  const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+  const materials = await materialsOf(recipes, transaction);
+  let changedStates = 0;
+  for (const recipe of recipes) {
+    const m = materials.get(recipe.id);
+    if (!m) throw conflict(`Recipe ${recipe.code} refers to a material that no longer exists; nothing was changed`);
+    let derived;
+    try {
+      const input = recipeInputOf(recipe);
+      derived = deriveRecipe(input, m, { parameters, map: recipeStateMap(input, m, parameters), calibration });
+    } catch (error) {
+      if (error instanceof PhysicsArgumentError) throw conflict(`Recipe ${recipe.code} could not be derived again (${error.message}); nothing was changed`);
+      throw error;
+    }
+    if (derived.predictedState !== recipe.predictedState) changedStates++;
+    recipe.set({ phi: derived.phi, reducedB2: derived.reducedB2, predictedState: derived.predictedState, margin: derived.margin, modelVersion: derived.modelVersion, derived });
+    await recipe.save({ transaction, silent: true });
+  }
+  const adhoc = await Observation.findAll({ where: { programmeId, recipeId: null, archivedAt: null }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+  for (const observation of adhoc) {
+    if (observation.adhocPhi === null || observation.adhocReducedB2 === null) continue;
+    const state = adhocPrediction(observation.adhocPhi, observation.adhocReducedB2, parameters);
+    if (state !== observation.adhocPredictedState) {
+      changedStates++;
+      observation.adhocPredictedState = state;
+      await observation.save({ transaction, silent: true });
+    }
+  }
+  return { recipes: recipes.length, observations: adhoc.length, changedStates };
+}
+
+/**
+ * Makes a proposed calibration the programme's own: the accepted one before it becomes
+ * superseded (kept in the history), and every stored prediction of the programme is recomputed
+ * with it — all in the route's one transaction, with the programme row locked for update first
+ * so that accepts, withdrawals and recipe creation in the programme take turns.
+ */
+export async function acceptCalibration(ctx: Ctx, programmeId: number, id: number) {
+  const transaction = ctx.transaction!;
+  const programme = await requireProgramme(programmeId, transaction, 'param', true);
+  if (programme.archivedAt) throw conflict('The programme is archived; restore it before changing its calibration');
+  const calibration = await loadCalibration(programmeId, id, transaction, true);
+  if (calibration.status === 'accepted') throw conflict('This calibration is already in use');
+  if (calibration.status !== 'proposed') throw conflict(`A ${calibration.status} calibration cannot be accepted again; fit a new one`);
+  if (calibration.modelVersion !== PHYSICS_MODEL_VERSION) throw conflict(`This calibration was fitted with physics model ${calibration.modelVersion}; the installation now runs ${PHYSICS_MODEL_VERSION}. Fit again.`);
+  const now = new Date();
+  const previous = await Calibration.findOne({ where: { programmeId, status: 'accepted' }, transaction, lock: transaction.LOCK.UPDATE });
+  if (previous) {
+    previous.set({ status: 'superseded', endedBy: ctx.user!.id, endedAt: now });
+    await previous.save({ transaction });
+  }
+  calibration.set({ status: 'accepted', acceptedBy: ctx.user!.id, acceptedAt: now });
+  await calibration.save({ transaction });
+  const recomputed = await recomputePredictions(ctx, programmeId);
+  await ctx.audit({
+    action: 'calibration.accepted',
+    entityType: 'calibration',
+    entityId: calibration.id,
+    details: { programmeId, supersedes: previous?.id ?? null, attractionShift: calibration.attractionShift, gelB2Threshold: calibration.gelB2Threshold, ...recomputed },
+  });
+  return { calibration: await loadCalibration(programmeId, id, transaction), recomputed };
+}
+
+/** Goes back to the uncalibrated theory: the accepted calibration is withdrawn, predictions recomputed, in one transaction. */
+export async function withdrawCalibration(ctx: Ctx, programmeId: number) {
+  const transaction = ctx.transaction!;
+  const programme = await requireProgramme(programmeId, transaction, 'param', true);
+  if (programme.archivedAt) throw conflict('The programme is archived; restore it before changing its calibration');
+  const accepted = await Calibration.findOne({ where: { programmeId, status: 'accepted' }, transaction, lock: transaction.LOCK.UPDATE });
+  if (!accepted) throw conflict('No calibration is in use: the programme already predicts with the uncalibrated theory');
+  accepted.set({ status: 'withdrawn', endedBy: ctx.user!.id, endedAt: new Date() });
+  await accepted.save({ transaction });
+  const recomputed = await recomputePredictions(ctx, programmeId);
+  await ctx.audit({ action: 'calibration.withdrawn', entityType: 'calibration', entityId: accepted.id, details: { programmeId, ...recomputed } });
+  return { calibration: await loadCalibration(programmeId, accepted.id, transaction), recomputed };
+}
+
