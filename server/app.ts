@@ -7,6 +7,7 @@ import { notFound } from './errors';
 import { errorHandler } from './http/error-handler';
 import { createLimiters } from './http/limiters';
 import { mountRoutes } from './http/mount';
+import { redactPath } from './http/redact';
 import type { AppDeps } from './http/route';
 import { sameOriginWrites, securityHeaders } from './http/security';
 import { ALL_ROUTES } from './routes';
@@ -26,7 +27,7 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   if (deps.config.LOG_REQUESTS) {
     app.use((req, res, next) => {
       const started = performance.now();
-      res.on('finish', () => console.log(`${req.method} ${req.originalUrl} ${res.statusCode} ${(performance.now() - started).toFixed(1)} ms`));
+      res.on('finish', () => console.log(`${req.method} ${redactPath(req.originalUrl)} ${res.statusCode} ${(performance.now() - started).toFixed(1)} ms`));
       next();
     });
   }

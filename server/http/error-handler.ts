@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler } from 'express';
 import { randomUUID } from 'node:crypto';
+import { redactPath } from './redact';
 import { HttpError, badRequest, conflict, internal, payloadTooLarge, serviceUnavailable, unsupportedMediaType } from '../errors';
 
 /**
@@ -10,7 +11,7 @@ export const errorHandler: ErrorRequestHandler = (error, req, res, _next) => {
   const httpError = toHttpError(error);
   if (httpError.status >= 500) {
     const reference = randomUUID().slice(0, 8);
-    if (httpError.report) console.error(`[${reference}] ${req.method} ${req.path}: ${describe(error)}`);
+    if (httpError.report) console.error(`[${reference}] ${req.method} ${redactPath(req.path)}: ${describe(error)}`);
     httpError.extra.reference = reference;
   }
   if (res.headersSent) return res.end();

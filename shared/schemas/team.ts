@@ -4,11 +4,13 @@ import { emailSchema, pageQuerySchema, personNameSchema } from './common';
 
 export const roleSchema = z.enum(ROLES, { error: `role must be one of ${ROLES.join(', ')}` });
 
-export const createInvitationSchema = z.object({
-  email: emailSchema,
-  name: personNameSchema,
-  role: roleSchema,
-});
+export const createInvitationSchema = z
+  .object({
+    email: emailSchema,
+    name: personNameSchema,
+    role: roleSchema,
+  })
+  .strict();
 export type CreateInvitationInput = z.infer<typeof createInvitationSchema>;
 
 export const updateUserSchema = z
