@@ -84,7 +84,8 @@ function removeStaleTestInstances() {
 }
 
 function runVitest(extraArgs: string[]): Promise<number> {
-  const report = join(root, 'test-results', 'vitest.json');
+  // One report per run, so runs started at the same time never read each other's results.
+  const report = join(root, 'test-results', `vitest-${process.pid}.json`);
   mkdirSync(dirname(report), { recursive: true });
   rmSync(report, { force: true });
   const args = ['run', `--maxWorkers=${TEST_WORKERS}`, '--reporter=default', '--reporter=json', `--outputFile.json=${report}`, ...extraArgs];
