@@ -5,7 +5,10 @@ import { conflict, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { invitationMail, passwordResetMail } from '../mail/templates';
 import { User } from '../models';
-import { issueToken } from './one-time-links';
+import type { HttpError } from '../errors';
+import type { TokenPurpose } from '../models/user-token';
+import { findLiveToken, issueToken } from './one-time-links';
+import { hashPassword } from './passwords';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -81,4 +84,23 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
   }
   await user.save({ transaction });
   return user;
+}
+
+/**
+ * Sets a password through a one-time link (an invitation, which also activates the account, or
+ * a reset, which needs an active one), spends the link and audits it, in the route's transaction.
+ */
+export async function setPasswordThroughLink(
+  ctx: Ctx,
+  input: { token: string; password: string; purpose: TokenPurpose; refusal: () => HttpError; action: string },
+): Promise<User> {
+  const live = await findLiveToken(input.token, input.purpose, ctx.transaction);
+  if (!live || (input.purpose === 'reset' && !live.user.active)) throw input.refusal();
+  live.user.passwordHash = await hashPassword(input.password, ctx.deps.config.BCRYPT_COST);
+  if (input.purpose === 'invitation') live.user.active = true;
+  await live.user.save({ transaction: ctx.transaction });
+  live.row.usedAt = new Date();
+  await live.row.save({ transaction: ctx.transaction });
+  await ctx.audit({ actorId: live.user.id, action: input.action, entityType: 'user', entityId: live.user.id });
+  return live.user;
 }

@@ -1,31 +1,21 @@
 import { execFileSync } from 'node:child_process';
 import { mkdirSync } from 'node:fs';
 import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { buildUser, signedInAgent } from '../support/builders';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm, SCREENSHOT_DIR } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm, SCREENSHOT_DIR } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { seriousAccessibilityViolations } from '../support/axe';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
-beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
+const suite = withBrowserStack();
 
 describe('the shortlist dossier', () => {
   it('prints to PDF with its map, every recipe, the approval history and the cautions', async () => {
     const lib = await buildLibrary();
     const programme = await buildProgramme({ name: 'Dossier programme' });
     const author = await buildUser({ role: 'formulator', name: 'Dora Dossier' });
-    const formulator = await signedInAgent(stack.app, author);
+    const formulator = await signedInAgent(suite.stack.app, author);
     const codes: string[] = [];
     const ids: number[] = [];
     for (const grams of [3, 8]) {
@@ -36,12 +26,12 @@ describe('the shortlist dossier', () => {
     const created = await formulator.post('/api/shortlists').send({ programmeId: programme.id, title: 'Dossier round one', purpose: 'Two doses for the shelf test', targetState: 'gel', items: ids.map((recipeId, i) => ({ recipeId, reason: `dose ${i + 1}` })) });
     const id = created.body.shortlist.id;
     await formulator.post(`/api/shortlists/${id}/submit`);
-    const manager = await signedInAgent(stack.app, await buildUser({ role: 'manager', name: 'Mona Manager' }));
+    const manager = await signedInAgent(suite.stack.app, await buildUser({ role: 'manager', name: 'Mona Manager' }));
     expect((await manager.post(`/api/shortlists/${id}/approve`).send({ comment: 'Mix both.' })).status).toBe(200);
 
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, author.email, author.password);
-    await page.goto(`${stack.url}/shortlists/${id}/dossier`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, author.email, author.password);
+    await page.goto(`${suite.stack.url}/shortlists/${id}/dossier`);
     await page.getByRole('img', { name: /^State map of shortlist/ }).waitFor();
     await page.getByText('Day 0').first().waitFor({ timeout: 1000 }).catch(() => {}); // no observations yet is fine
     expect(await seriousAccessibilityViolations(page)).toEqual([]);

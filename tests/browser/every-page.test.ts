@@ -1,21 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { seriousAccessibilityViolations } from '../support/axe';
 import { buildUser, signedInAgent } from '../support/builders';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildLibrary, buildProgramme, pngBytes, recipeInput } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
-beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
+const suite = withBrowserStack();
 
 /** Waits for the page's main heading (or the sign-in frame), so the screenshot shows a settled page. */
 async function settled(page: Page) {
@@ -29,16 +20,16 @@ describe('every page', () => {
     const lib = await buildLibrary();
     const programme = await buildProgramme({ name: 'Tour programme' });
     const admin = await buildUser({ role: 'admin', name: 'Tova Tour' });
-    const api = await signedInAgent(stack.app, admin);
+    const api = await signedInAgent(suite.stack.app, admin);
     const recipe = (await api.post('/api/recipes').send(recipeInput(programme, lib, { name: 'Tour gel', attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 9 } }))).body.recipe;
     const observation = (await api.post('/api/observations').send({ recipeId: recipe.id, mixedAt: '2026-11-01', ageDays: 7, observedState: 'gel', method: 'microscopy', notes: 'network visible' })).body.observation;
     await api.post(`/api/observations/${observation.id}/attachments`).attach('files', pngBytes(64, 48), 'tour micrograph.png');
     const shortlist = (await api.post('/api/shortlists').send({ programmeId: programme.id, title: 'Tour shortlist', targetState: 'gel', items: [{ recipeId: recipe.id, reason: 'widest margin' }] })).body.shortlist;
 
     const visited: string[] = [];
-    const { page, context, unexpected } = await openCheckedPage(browser);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
     const check = async (path: string, name: string) => {
-      await page.goto(`${stack.url}${path}`);
+      await page.goto(`${suite.stack.url}${path}`);
       await settled(page);
       const violations = await seriousAccessibilityViolations(page);
       expect(violations, `${path}: ${JSON.stringify(violations, null, 1)}`).toEqual([]);
@@ -53,7 +44,7 @@ describe('every page', () => {
     ] as const) {
       await check(path, name);
     }
-    await signInThroughForm(page, stack.url, admin.email, admin.password);
+    await signInThroughForm(page, suite.stack.url, admin.email, admin.password);
     const p = `programme=${programme.id}`;
     for (const [path, name] of [
       ['/', 'overview'],

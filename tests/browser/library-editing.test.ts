@@ -1,21 +1,12 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { ParticleSystem } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, unique } from '../support/builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
-beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
+const suite = withBrowserStack();
 
 async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
@@ -26,9 +17,9 @@ describe('editing the library', () => {
   it('a formulator adds a particle system (errors next to the fields first), replaces it, archives and restores it', async () => {
     const name = unique('Latex 250 nm');
     const formulator = await buildUser({ role: 'formulator' });
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
-    await page.goto(`${stack.url}/library`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/library`);
     await page.getByRole('button', { name: 'Add a particle system' }).click();
     const form = page.getByRole('form', { name: 'Add a particle system' });
     await form.getByLabel('Name').fill(name);

@@ -1,32 +1,22 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { STATE_LABELS } from '../../shared/states';
 import { seriousAccessibilityViolations } from '../support/axe';
 import { buildUser } from '../support/builders';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildLibrary, buildProgramme } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 import { Recipe } from '../../server/models';
 
-let stack: TestStack;
-let browser: Browser;
-beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
+const suite = withBrowserStack();
 
 describe('from a new recipe to the map', () => {
   it('a formulator composes a recipe with a live prediction, saves it, and finds it on the map with its predicted state', async () => {
     const lib = await buildLibrary();
     const programme = await buildProgramme({ name: 'Map walk programme' });
     const formulator = await buildUser({ role: 'formulator' });
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
-    await page.goto(`${stack.url}/recipes/new?programme=${programme.id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/recipes/new?programme=${programme.id}`);
     const form = page.getByRole('form', { name: 'Recipe' });
     await form.getByLabel('Name').fill('Walk-through gel');
     await form.getByLabel('Particle system').selectOption({ label: `${lib.particle.name} (radius ${lib.particle.radiusNm} nm)` });
@@ -69,9 +59,9 @@ describe('from a new recipe to the map', () => {
     const programme = await buildProgramme({ name: 'URL view programme', attractionSource: 'salt' });
     const viewer = await buildUser({ role: 'viewer' });
     void lib;
-    const first = await openCheckedPage(browser);
-    await signInThroughForm(first.page, stack.url, viewer.email, viewer.password);
-    await first.page.goto(`${stack.url}/map?programme=${programme.id}`);
+    const first = await openCheckedPage(suite.browser);
+    await signInThroughForm(first.page, suite.stack.url, viewer.email, viewer.password);
+    await first.page.goto(`${suite.stack.url}/map?programme=${programme.id}`);
     await first.page.getByRole('img', { name: /^State map of URL view programme/ }).waitFor();
     await first.page.getByLabel('Attraction axis').selectOption('inverseTau');
     await first.page.getByLabel('Fluid–fluid theory').selectOption('baxterPY');
@@ -85,8 +75,8 @@ describe('from a new recipe to the map', () => {
     const ticks = await first.page.locator('[data-testid="state-map"] text').allTextContents();
     await first.context.close();
 
-    const second = await openCheckedPage(browser);
-    await signInThroughForm(second.page, stack.url, viewer.email, viewer.password);
+    const second = await openCheckedPage(suite.browser);
+    await signInThroughForm(second.page, suite.stack.url, viewer.email, viewer.password);
     await second.page.goto(url);
     await second.page.getByRole('img', { name: /^State map/ }).waitFor();
     expect(await second.page.getByLabel('Attraction axis').inputValue()).toBe('inverseTau');

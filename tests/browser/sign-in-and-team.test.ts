@@ -1,23 +1,13 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { ROLES, ROLE_LABELS } from '../../shared/roles';
 import { buildUser, uniqueEmail } from '../support/builders';
-import { launchBrowser, openPage, screenshot, signInThroughForm } from '../support/browser';
-import { startTestStack, type TestStack } from '../support/test-stack';
+import { openPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 
-let stack: TestStack;
-let browser: Browser;
-beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
+const suite = withBrowserStack();
 
 /** What the rail shows each role: every screen reads data; only administrators manage the team. */
-const SHARED_SCREENS = ['Overview', 'State map', 'Recipes', 'Bench log', 'Shortlists', 'Library', 'Find'];
+const SHARED_SCREENS = ['Overview', 'State map', 'Recipes', 'Bench log', 'Shortlists', 'Calibrate', 'Library', 'Find'];
 const NAV_FOR: Record<(typeof ROLES)[number], string[]> = {
   admin: [...SHARED_SCREENS, 'Team'],
   manager: SHARED_SCREENS,
@@ -30,19 +20,19 @@ describe('signing in as each role', () => {
   for (const role of ROLES) {
     it(`${role}: signs in, sees only its screens in the rail, signs out`, async () => {
       const who = await buildUser({ role, name: `Browser ${ROLE_LABELS[role]}` });
-      const { page, context, problems } = await openPage(browser);
-      await signInThroughForm(page, stack.url, who.email, who.password);
+      const { page, context, problems } = await openPage(suite.browser);
+      await signInThroughForm(page, suite.stack.url, who.email, who.password);
       await expect.poll(() => page.getByTestId('signed-in-role').textContent()).toBe(ROLE_LABELS[role]);
       const links = await page.getByRole('navigation', { name: 'Main' }).getByRole('link').allTextContents();
       expect(links).toEqual(NAV_FOR[role]);
       await screenshot(page, `overview-${role}`);
       if (role !== 'admin') {
-        await page.goto(`${stack.url}/team`);
+        await page.goto(`${suite.stack.url}/team`);
         await expect.poll(() => page.getByText('Only administrators manage the team.').isVisible()).toBe(true);
       }
       await page.getByRole('button', { name: 'Sign out' }).click();
       await page.getByRole('heading', { name: 'Sign in' }).waitFor();
-      await page.goto(`${stack.url}/`);
+      await page.goto(`${suite.stack.url}/`);
       await page.waitForURL(/\/sign-in\?next=/);
       expect(problems.filter((p) => !p.includes('401'))).toEqual([]);
       await context.close();
@@ -51,8 +41,8 @@ describe('signing in as each role', () => {
 
   it('shows the same message for a wrong password next to the form', async () => {
     const who = await buildUser({ role: 'viewer' });
-    const { page, context } = await openPage(browser);
-    await page.goto(`${stack.url}/sign-in`);
+    const { page, context } = await openPage(suite.browser);
+    await page.goto(`${suite.stack.url}/sign-in`);
     await page.getByLabel('E-mail').fill(who.email);
     await page.getByLabel('Password').fill('certainly-wrong');
     await page.getByRole('button', { name: 'Sign in' }).click();
@@ -65,8 +55,8 @@ describe('signing in as each role', () => {
 describe('inviting a person', () => {
   it('admin invites through the Team page; the invitee follows the link from the outbox, sets a password and signs in', async () => {
     const admin = await buildUser({ role: 'admin', name: 'Ilse Browser-Admin' });
-    const { page, context, problems } = await openPage(browser);
-    await signInThroughForm(page, stack.url, admin.email, admin.password);
+    const { page, context, problems } = await openPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, admin.email, admin.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Team' }).click();
     const email = uniqueEmail('newhire');
     const form = page.getByRole('form', { name: 'Invite a person' });
@@ -82,7 +72,7 @@ describe('inviting a person', () => {
     await page.getByRole('button', { name: /You are invited to Gelwright/ }).first().click();
     const link = page.getByTestId('outbox-message-text').getByRole('link');
     const href = await link.first().getAttribute('href');
-    expect(href).toContain(`${stack.url}/accept-invitation?token=`);
+    expect(href).toContain(`${suite.stack.url}/accept-invitation?token=`);
     await screenshot(page, 'team-outbox');
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();

@@ -5,8 +5,7 @@ import { route } from '../../http/route';
 import { badRequest } from '../../errors';
 import { presentUser } from '../../presenters/user';
 import { findLiveToken } from '../../services/one-time-links';
-import { hashPassword } from '../../services/passwords';
-import { inviteUser } from '../../services/team';
+import { inviteUser, setPasswordThroughLink } from '../../services/team';
 
 const EXPIRED = () => badRequest('This invitation link has expired or was used already; ask an administrator for a new one', 'token');
 
@@ -41,16 +40,9 @@ export const invitationRoutes = [
     summary: 'Set a password through an invitation link and activate the account',
     limiters: ['mailByAddress'],
     body: acceptInvitationSchema,
-    async handler({ body, transaction, deps, audit }) {
-      const live = await findLiveToken(body.token, 'invitation', transaction);
-      if (!live) throw EXPIRED();
-      live.user.passwordHash = await hashPassword(body.password, deps.config.BCRYPT_COST);
-      live.user.active = true;
-      await live.user.save({ transaction });
-      live.row.usedAt = new Date();
-      await live.row.save({ transaction });
-      await audit({ actorId: live.user.id, action: 'invitation.accepted', entityType: 'user', entityId: live.user.id });
-      return { body: { user: presentUser(live.user) } };
+    async handler(ctx) {
+      const user = await setPasswordThroughLink(ctx, { ...ctx.body, purpose: 'invitation', refusal: EXPIRED, action: 'invitation.accepted' });
+      return { body: { user: presentUser(user) } };
     },
   }),
 ];

@@ -1,9 +1,7 @@
 import { confirmPasswordResetSchema, requestPasswordResetSchema } from '../../../shared/schemas/auth';
 import { route } from '../../http/route';
 import { badRequest } from '../../errors';
-import { findLiveToken } from '../../services/one-time-links';
-import { hashPassword } from '../../services/passwords';
-import { requestPasswordReset } from '../../services/team';
+import { requestPasswordReset, setPasswordThroughLink } from '../../services/team';
 
 export const passwordResetRoutes = [
   route({
@@ -25,14 +23,13 @@ export const passwordResetRoutes = [
     summary: 'Set a new password through a reset link',
     limiters: ['mailByAddress'],
     body: confirmPasswordResetSchema,
-    async handler({ body, transaction, deps, audit }) {
-      const live = await findLiveToken(body.token, 'reset', transaction);
-      if (!live || !live.user.active) throw badRequest('This reset link has expired or was used already; ask for a new one', 'token');
-      live.user.passwordHash = await hashPassword(body.password, deps.config.BCRYPT_COST);
-      await live.user.save({ transaction });
-      live.row.usedAt = new Date();
-      await live.row.save({ transaction });
-      await audit({ actorId: live.user.id, action: 'password_reset.completed', entityType: 'user', entityId: live.user.id });
+    async handler(ctx) {
+      await setPasswordThroughLink(ctx, {
+        ...ctx.body,
+        purpose: 'reset',
+        refusal: () => badRequest('This reset link has expired or was used already; ask for a new one', 'token'),
+        action: 'password_reset.completed',
+      });
       return { body: { message: 'Password changed; sign in with the new one.' } };
     },
   }),

@@ -1,10 +1,9 @@
 import { useMemo } from 'react';
-import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
 import type { StateMap as PhysicsMap } from '@shared/physics/map/types';
 import type { ObservedState, PredictedState } from '@shared/states';
 import type { RecipeDerived } from '@shared/views/team-data';
 import { cachedStateMap } from '@shared/state-map-cache';
-import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
+import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { axisTop } from '../hooks/use-map-drawing';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
@@ -27,19 +26,7 @@ export function RecipeMiniMap({ map: predictionMap, derived, code, observations 
     return cachedStateMap(predictionMap.model, { parameters: predictionMap.parameters, polydispersity: predictionMap.polydispersity ?? undefined, yMax });
   }, [predictionMap, derived.reducedB2, derived.polymerReservoir]);
   const drawing = useMemo(() => drawingFromStateMap(map), [map]);
-  const y = useMemo(() => {
-    try {
-      const raw =
-        map.model.kind === 'depletion' && derived.polymerReservoir !== null && derived.sizeRatio !== null
-          ? attractionToMapY(map, { kind: 'depletion', q: derived.sizeRatio, polymerReservoir: derived.polymerReservoir })
-          : derived.reducedB2 !== null
-            ? attractionToMapY(map, { kind: 'b2', value: derived.reducedB2 })
-            : null;
-      return raw === null ? null : drawnY(map, raw);
-    } catch {
-      return null;
-    }
-  }, [map, derived]);
+  const y = useMemo(() => derivedDrawnY(map, derived), [map, derived]);
   const points: MapPoint[] = useMemo(() => {
     if (y === null) return [];
     const predicted = derived.predictedState as PredictedState | null;

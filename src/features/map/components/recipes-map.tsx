@@ -1,9 +1,8 @@
 import { useMemo } from 'react';
-import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
 import type { MapModel } from '@shared/physics/map/types';
 import { cachedStateMap } from '@shared/state-map-cache';
 import type { RecipeDerived } from '@shared/views/team-data';
-import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
+import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
 import { axisTop } from '../hooks/use-map-drawing';
@@ -34,18 +33,10 @@ export function RecipesMap({ recipes, height = 420, title }: { recipes: { code: 
     const points: MapPoint[] = [];
     for (const [index, r] of recipes.entries()) {
       const d = r.derived;
-      try {
-        const y =
-          model.kind === 'depletion' && d.polymerReservoir !== null && d.sizeRatio !== null
-            ? attractionToMapY(map, { kind: 'depletion', q: d.sizeRatio, polymerReservoir: d.polymerReservoir })
-            : d.reducedB2 !== null
-              ? attractionToMapY(map, { kind: 'b2', value: d.reducedB2 })
-              : null;
-        if (y === null) continue;
-        points.push({ key: r.code, kind: 'recipe', id: index, x: d.phi, y: drawnY(map, y), state: d.predictedState ?? 'unclear', predicted: d.predictedState, agrees: null, code: r.code, name: r.name, ageDays: null, recipeId: null, margin: d.margin });
-      } catch {
-        /* a recipe without a place on this map is listed, not drawn */
-      }
+      const y = derivedDrawnY(map, d);
+      // A recipe without a place on this map is listed, not drawn.
+      if (y === null) continue;
+      points.push({ key: r.code, kind: 'recipe', id: index, x: d.phi, y, state: d.predictedState ?? 'unclear', predicted: d.predictedState, agrees: null, code: r.code, name: r.name, ageDays: null, recipeId: null, margin: d.margin });
     }
     return { drawing: drawingFromStateMap(map), points };
   }, [recipes]);

@@ -1,4 +1,6 @@
+import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
 import type { MapBoundary, StateMap } from '@shared/physics/map/types';
+import type { RecipeDerived } from '@shared/views/team-data';
 import type { MapDrawing, MapLine, XY } from './types';
 
 const TONE_OF: Record<MapBoundary['id'], MapLine['tone']> = {
@@ -47,4 +49,22 @@ export function drawingFromStateMap(map: StateMap): MapDrawing {
 /** The drawn ŷ of a value on the map's own y axis (B2* is flipped). */
 export function drawnY(map: StateMap, y: number) {
   return map.y.inverted ? -y : y;
+}
+
+/**
+ * The drawn ŷ of a derived recipe on a map: by its polymer fraction on a depletion map (at its
+ * own q, placed through B2* when q differs), else by its B2*; null when it has no place there.
+ */
+export function derivedDrawnY(map: StateMap, derived: Pick<RecipeDerived, 'polymerReservoir' | 'sizeRatio' | 'reducedB2'>): number | null {
+  try {
+    const y =
+      map.model.kind === 'depletion' && derived.polymerReservoir !== null && derived.sizeRatio !== null
+        ? attractionToMapY(map, { kind: 'depletion', q: derived.sizeRatio, polymerReservoir: derived.polymerReservoir })
+        : derived.reducedB2 !== null
+          ? attractionToMapY(map, { kind: 'b2', value: derived.reducedB2 })
+          : null;
+    return y === null || !Number.isFinite(y) ? null : drawnY(map, y);
+  } catch {
+    return null;
+  }
 }
