@@ -5,6 +5,7 @@ import { recordAudit } from '../services/audit';
 import { currentUser } from './authenticate';
 import type { AppDeps, HandlerContext, LimiterName, RouteSpec } from './route';
 import { parseOrThrow } from './validate';
+import { writeCommitted } from './write-events';
 
 type Limiters = Record<LimiterName, RequestHandler>;
 
@@ -79,6 +80,7 @@ function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
           })
         : await spec.handler(ctx);
       ctx.transaction = null;
+      if (transactional) writeCommitted();
       for (const task of tasks) {
         // The write is committed: a failed side effect (mail) is logged, never undoes it.
         await task().catch((error: Error) => console.warn(`after-commit task failed: ${error.message}`));

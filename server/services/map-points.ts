@@ -3,6 +3,7 @@ import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { observationAgrees, type ObservedState, type PredictedState } from '../../shared/states';
 import type { MapPoints, RecipeDerived } from '../../shared/views/team-data';
+import { onWriteCommitted } from '../http/write-events';
 
 const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : 4 * (1 - b2));
 /** Six significant digits: far finer than any map can show, and a third of the bytes. */
@@ -65,19 +66,31 @@ export interface CachedMapPoints {
 
 /** Answers kept at most this long even when nothing seems to have changed (a same-millisecond update). */
 const MAX_AGE_MS = 10_000;
-const cache = new Map<number, CachedMapPoints & { version: string; at: number }>();
+/**
+ * For this long an answer is served without asking the database whether the programme
+ * changed: any write committed through this process drops the cache at once, so only writes
+ * through other processes can be this late to show.
+ */
+const TRUST_MS = 250;
+const cache = new Map<number, CachedMapPoints & { version: string; at: number; checkedAt: number }>();
+onWriteCommitted(() => cache.clear());
 
 /**
  * The overlay of a programme, built once per change and kept in memory as JSON and gzip, so the
  * map of a large programme costs a version check rather than 10,000 rows of work per request.
  */
 export async function cachedMapPoints(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
+  const recent = cache.get(programmeId);
+  if (recent && Date.now() - recent.checkedAt < TRUST_MS) return recent;
   const version = await programmeVersion(sequelize, programmeId);
   if (version === null) return null;
   const hit = cache.get(programmeId);
-  if (hit && hit.version === version && Date.now() - hit.at < MAX_AGE_MS) return hit;
+  if (hit && hit.version === version && Date.now() - hit.at < MAX_AGE_MS) {
+    hit.checkedAt = Date.now();
+    return hit;
+  }
   const json = Buffer.from(JSON.stringify(await buildMapPoints(sequelize, programmeId)));
-  const entry = { version, at: Date.now(), json, gzip: gzipSync(json, { level: 6 }), etag: `"${createHash('sha1').update(json).digest('base64url')}"` };
+  const entry = { version, at: Date.now(), checkedAt: Date.now(), json, gzip: gzipSync(json, { level: 6 }), etag: `"${createHash('sha1').update(json).digest('base64url')}"` };
   cache.set(programmeId, entry);
   if (cache.size > 100) cache.delete(cache.keys().next().value!);
   return entry;
