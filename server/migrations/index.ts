@@ -2,6 +2,7 @@ import type { QueryInterface } from 'sequelize';
 import * as m0001 from './0001-users-and-audit';
 import * as m0002 from './0002-team-data';
 import * as m0003 from './0003-calibrations';
+import * as m0004 from './0004-plans';
 import * as m0005 from './0005-programme-change-indexes';
 
 export interface Migration {
@@ -16,4 +17,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0002-team-data', ...m0002 },
   { name: '0003-calibrations', ...m0003 },
   { name: '0005-programme-change-indexes', ...m0005 },
+  { name: '0004-plans', ...m0004 },
 ];

@@ -11,10 +11,12 @@ import { Attachment } from './attachment';
 import { ImportBatch } from './import-batch';
 import { Shortlist, ShortlistItem, ShortlistEvent } from './shortlist';
 import { Calibration } from './calibration';
+import { Plan } from './plan';
+import { PlanRecipe } from './plan-recipe';
 
-export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration };
+export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe };
 
-const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration];
+const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe];
 
 /** Binds every model to the process's Sequelize instance and declares the associations. */
 export function initModels(sequelize: Sequelize) {
@@ -40,4 +42,7 @@ export function initModels(sequelize: Sequelize) {
   Calibration.belongsTo(User, { foreignKey: 'fittedBy', as: 'fitter' });
   Calibration.belongsTo(User, { foreignKey: 'acceptedBy', as: 'acceptor' });
   Calibration.belongsTo(User, { foreignKey: 'endedBy', as: 'ender' });
+  Plan.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
+  Plan.hasMany(PlanRecipe, { foreignKey: 'planId', as: 'made' });
+  PlanRecipe.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
 }

@@ -14,6 +14,7 @@ import { attachmentRoutes } from './attachments/router';
 import { shortlistRoutes } from './shortlists/router';
 import { mapPointRoutes } from './map-points/router';
 import { calibrationRoutes } from './calibrations/router';
+import { planRoutes } from './plans/router';
 
 /**
  * Every API route of the installation. The role-matrix test walks this list, so a route
@@ -36,4 +37,5 @@ export const ALL_ROUTES: RouteSpec[] = [
   ...shortlistRoutes,
   ...mapPointRoutes,
   ...calibrationRoutes,
+  ...planRoutes,
 ];

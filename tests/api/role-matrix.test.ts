@@ -36,6 +36,7 @@ const ALLOW: Record<string, Expectation> = {
   ...shortlists(),
   'GET /api/map-points': EVERY_ROLE,
   ...calibrations(),
+  ...plans(),
 };
 
 function programmes(): Record<string, Expectation> {
@@ -112,6 +113,17 @@ function calibrations(): Record<string, Expectation> {
     'POST /api/programmes/:id/calibrations': ['admin', 'manager', 'formulator', 'scientist'],
     'POST /api/programmes/:id/calibrations/:calibrationId/accept': ['admin', 'manager'],
     'POST /api/programmes/:id/calibrations/withdraw': ['admin', 'manager'],
+  };
+}
+
+/** Formulators and admins run the planner and make recipes from plans; everyone reads them (issue: planner). */
+function plans(): Record<string, Expectation> {
+  return {
+    'GET /api/plans': EVERY_ROLE,
+    'GET /api/plans/:id': EVERY_ROLE,
+    'POST /api/plans': ['admin', 'formulator'],
+    'POST /api/plans/:id/recipes': ['admin', 'formulator'],
+    'POST /api/plans/:id/next-experiments/recipes': ['admin', 'formulator'],
   };
 }
 
