@@ -9,7 +9,7 @@ export { compositionSpace, SALT_TABLE_NODES } from './composition-space';
 export { plannedRecipeInput, type PlanTemplate } from './planned-recipe-input';
 export { materialCostPerLitre, type CostInputs } from './material-cost-per-litre';
 export { DEFAULT_BOUNDARY_UNCERTAINTY } from './default-boundary-uncertainty';
-export { DEFAULT_RANKING_WEIGHTS, rankCandidates } from './rank-candidates';
+export { DEFAULT_RANKING_WEIGHTS, rankCandidates, type Ranked } from './rank-candidates';
 export { targetProbability } from './target-probability';
 export { membershipOffset } from './membership-offset';
 export { proposeExperiments, BAND_Z, EXPERIMENT_POOL } from './propose-experiments';
@@ -20,6 +20,7 @@ export { sampleCompositions, type SampledComposition } from './sample-compositio
 export { screeningMap, SCREENING_MAX_LEVELS } from './screening-map';
 export { placeEvidence, type PlacedEvidence } from './place-evidence';
 export { nearestEvidence, NEAR_EVIDENCE_DISTANCE } from './nearest-evidence';
+export { evidenceIndex } from './evidence-index';
 export { mapPosition } from './map-position';
 export { pickSpaced } from './pick-spaced';
 export { haltonPoints } from './halton-points';

@@ -32,23 +32,24 @@ export function materialCostPerLitre(phi: number, dose: number, kind: 'polymer' 
   if (!(phi >= 0 && phi < 1)) throw new RangeError(`materialCostPerLitre: φ must be in [0, 1); got ${phi}`);
   if (!(dose >= 0) || !Number.isFinite(dose)) throw new RangeError(`materialCostPerLitre: the dose must be a finite number ≥ 0; got ${dose}`);
   if (!(inputs.particleDensity > 0) || !(inputs.solventDensity > 0)) throw new RangeError('materialCostPerLitre: densities must be positive');
+  // Written without inner closures: this runs for every composition that meets a plan.
   const unpriced: string[] = [];
-  const priced = (kilograms: number, price: number | null | undefined, name: string) => {
-    if (price === null || price === undefined) {
-      if (kilograms > 0) unpriced.push(name);
-      return 0;
-    }
-    return kilograms * price;
-  };
+  const { prices } = inputs;
   const solventShare = 1 - phi;
-  const particles = priced(phi * inputs.particleDensity, inputs.prices.particles, 'particles');
-  const solvent = priced(solventShare * inputs.solventDensity, inputs.prices.solvent, 'solvent');
-  const polymer = kind === 'polymer' ? priced((dose * solventShare) / 1000, inputs.prices.polymer, 'polymer') : 0;
-  let salt = 0;
-  if (kind === 'salt') {
-    if (inputs.saltMolarMass == null) {
-      if (dose > 0) unpriced.push('salt (no molar mass)');
-    } else salt = priced((dose * solventShare * inputs.saltMolarMass) / 1e6, inputs.prices.salt, 'salt');
+  const particleKg = phi * inputs.particleDensity;
+  const solventKg = solventShare * inputs.solventDensity;
+  const polymerKg = kind === 'polymer' ? (dose * solventShare) / 1000 : 0;
+  const saltKg = kind === 'salt' && inputs.saltMolarMass != null ? (dose * solventShare * inputs.saltMolarMass) / 1e6 : 0;
+  if (prices.particles == null && particleKg > 0) unpriced.push('particles');
+  if (prices.solvent == null && solventKg > 0) unpriced.push('solvent');
+  if (prices.polymer == null && polymerKg > 0) unpriced.push('polymer');
+  if (kind === 'salt' && dose > 0) {
+    if (inputs.saltMolarMass == null) unpriced.push('salt (no molar mass)');
+    else if (prices.salt == null) unpriced.push('salt');
   }
+  const particles = particleKg * (prices.particles ?? 0);
+  const solvent = solventKg * (prices.solvent ?? 0);
+  const polymer = polymerKg * (prices.polymer ?? 0);
+  const salt = saltKg * (prices.salt ?? 0);
   return { total: particles + solvent + polymer + salt, parts: { particles, solvent, polymer, salt }, unpriced };
 }

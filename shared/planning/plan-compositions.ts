@@ -3,7 +3,7 @@ import { STATE_LABELS } from '../states';
 import { explainExperiments } from './explain-experiments';
 import { feasibleWindow } from './feasible-window';
 import { mapPosition } from './map-position';
-import { nearestEvidence } from './nearest-evidence';
+import { evidenceIndex } from './evidence-index';
 import { pickSpaced } from './pick-spaced';
 import { placeEvidence } from './place-evidence';
 import { proposeExperiments } from './propose-experiments';
@@ -11,6 +11,9 @@ import { rankCandidates } from './rank-candidates';
 import { relaxationAdvice } from './relaxation-advice';
 import { sampleCompositions } from './sample-compositions';
 import type { PlanOutcome, PlanProblem, PlannedCandidate, ValueRange } from './types';
+
+/** How far (normalised map units) ranking looks for bench evidence: e^(−0.25/0.05) < 0.007. */
+const RANKING_EVIDENCE_REACH = 0.25;
 
 /**
  * From a target state to ranked compositions, and the next experiments (the Planner).
@@ -45,23 +48,26 @@ export function planCompositions<V>(problem: PlanProblem<V>): PlanOutcome<V> {
   for (const s of inTarget) if (!bestInRange || s.margin > bestInRange.margin) bestInRange = { phi: s.phi, level: s.level, margin: s.margin };
 
   const evidence = placeEvidence(space.map, problem.evidence);
+  const nearest = evidenceIndex(evidence, target);
   const enriched = feasible.map((s) => {
     const mapY = attractionToMapY(space.map, space.place(s.phi, s.level)!);
     const { x, u } = mapPosition(space.map, s.phi, mapY);
-    return { ...s, mapY, cost: problem.cost(s.phi, s.level), evidence: nearestEvidence(x, u, evidence, target), verified: null as V | null };
+    // Evidence further than RANKING_EVIDENCE_REACH scores below e^−5 (rankCandidates): not looked for here.
+    return { sample: s, mapY, x, u, margin: s.margin, cost: problem.cost(s.phi, s.level), evidence: nearest(x, u, RANKING_EVIDENCE_REACH) };
   });
   const ranked = rankCandidates(enriched, problem.weights);
-  const scaled = (c: { phi: number; level: number }) => [(c.phi - phi.min) / (phi.max - phi.min), (c.level - level.min) / (level.max - level.min)] as const;
+  const scaled = (c: (typeof ranked)[number]) => [(c.item.sample.phi - phi.min) / (phi.max - phi.min), (c.item.sample.level - level.min) / (level.max - level.min)] as const;
+  const verified = new Map<(typeof ranked)[number], V>();
   const { picked, tried, rejected } = pickSpaced(ranked, problem.count, 0.5 / Math.sqrt(problem.count), scaled, (candidate) => {
     if (!problem.verify) return true;
-    const exact = problem.verify(candidate.phi, candidate.level);
+    const exact = problem.verify(candidate.item.sample.phi, candidate.item.sample.level);
     if (!exact || exact.state !== target || exact.margin === null || exact.margin < minMargin) return false;
-    candidate.verified = exact.detail;
+    verified.set(candidate, exact.detail);
     return true;
   }, { budget: 3 * problem.count + 10 });
   const candidates: PlannedCandidate<V>[] = picked.map((c) => ({
-    phi: c.phi, level: c.level, state: c.state, margin: c.margin, nearestBoundary: c.nearestBoundary, mapY: c.mapY,
-    cost: c.cost, evidence: c.evidence, score: c.score, scores: c.scores, verified: c.verified,
+    phi: c.item.sample.phi, level: c.item.sample.level, state: c.item.sample.state, margin: c.item.margin, nearestBoundary: c.item.sample.nearestBoundary, mapY: c.item.mapY,
+    cost: c.item.cost, evidence: c.item.evidence ?? nearest(c.item.x, c.item.u), score: c.score, scores: c.scores, verified: verified.get(c) ?? null,
   }));
 
   const window = feasibleWindow(space, phi, level, target, minMargin);

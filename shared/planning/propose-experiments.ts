@@ -3,7 +3,8 @@ import { attractionToMapY } from '../physics';
 import type { GoalState } from '../states';
 import { mapPosition } from './map-position';
 import { membershipOffset } from './membership-offset';
-import { NEAR_EVIDENCE_DISTANCE, nearestEvidence } from './nearest-evidence';
+import { evidenceIndex } from './evidence-index';
+import { NEAR_EVIDENCE_DISTANCE } from './nearest-evidence';
 import { pickSpaced } from './pick-spaced';
 import type { PlacedEvidence } from './place-evidence';
 import type { SampledComposition } from './sample-compositions';
@@ -38,6 +39,7 @@ export function proposeExperiments(space: CompositionSpace, pool: readonly Sampl
   const reach = BAND_Z * uncertainty.standardError;
   const band = { low: uncertainty.shift - reach, high: uncertainty.shift + reach };
   if (count <= 0 || !(reach > 0)) return { items: [], band };
+  const nearestTo = evidenceIndex(evidence, target);
   const scored: (ProposedExperiment<never> & { x: number; u: number; value: number })[] = [];
   for (const sample of pool.slice(0, EXPERIMENT_POOL)) {
     const attraction = space.place(sample.phi, sample.level);
@@ -47,7 +49,7 @@ export function proposeExperiments(space: CompositionSpace, pool: readonly Sampl
     const probability = targetProbability(offset, uncertainty);
     const mapY = attractionToMapY(space.map, attraction);
     const { x, u } = mapPosition(space.map, sample.phi, mapY);
-    const near = nearestEvidence(x, u, evidence, target);
+    const near = nearestTo(x, u);
     const novelty = near ? 1 - Math.exp(-((near.distance / NEAR_EVIDENCE_DISTANCE) ** 2)) : 1;
     const value = (1 - Math.abs(2 * probability - 1)) * novelty;
     // Next to a sample the bench already has (or certain after all): nothing to learn.

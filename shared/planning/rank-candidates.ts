@@ -10,6 +10,12 @@ interface Rankable {
   evidence: NearestEvidence | null;
 }
 
+export interface Ranked<T> {
+  item: T;
+  score: number;
+  scores: { margin: number; cost: number; evidence: number };
+}
+
 /**
  * Orders compositions that meet a plan by a weighted sum of three scores, each in [0, 1]
  * (simple additive weighting with linear min–max normalisation: C.-L. Hwang & K. Yoon,
@@ -24,31 +30,29 @@ interface Rankable {
  * @throws RangeError for negative or all-zero weights.
  * @example rankCandidates([{ margin: 0.2, cost, evidence: null }, …], DEFAULT_RANKING_WEIGHTS)[0].score
  */
-export function rankCandidates<T extends Rankable>(items: readonly T[], weights: RankingWeights): (T & { score: number; scores: { margin: number; cost: number; evidence: number } })[] {
+export function rankCandidates<T extends Rankable>(items: readonly T[], weights: RankingWeights): Ranked<T>[] {
   const { margin: wm, cost: wc, evidence: we } = weights;
   if (!(wm >= 0 && wc >= 0 && we >= 0) || wm + wc + we === 0) throw new RangeError('rankCandidates: weights must be ≥ 0 and not all zero');
   const total = wm + wc + we;
-  const [marginLow, marginHigh] = extent(items.map((i) => i.margin));
-  const [costLow, costHigh] = extent(items.map((i) => i.cost.total));
-  const scale = (value: number, low: number, high: number) => (high > low ? (value - low) / (high - low) : 1);
-  return items
-    .map((item) => {
-      const scores = {
-        margin: scale(item.margin, marginLow, marginHigh),
-        cost: costHigh > costLow ? (costHigh - item.cost.total) / (costHigh - costLow) : 1,
-        evidence: item.evidence && item.evidence.agrees ? Math.exp(-item.evidence.distance / NEAR_EVIDENCE_DISTANCE) : 0,
-      };
-      return { ...item, scores, score: (wm * scores.margin + wc * scores.cost + we * scores.evidence) / total };
-    })
-    .sort((a, b) => b.score - a.score || b.margin - a.margin);
-}
-
-function extent(values: number[]): [number, number] {
-  let low = Infinity;
-  let high = -Infinity;
-  for (const v of values) {
-    if (v < low) low = v;
-    if (v > high) high = v;
+  let marginLow = Infinity;
+  let marginHigh = -Infinity;
+  let costLow = Infinity;
+  let costHigh = -Infinity;
+  for (const item of items) {
+    if (item.margin < marginLow) marginLow = item.margin;
+    if (item.margin > marginHigh) marginHigh = item.margin;
+    if (item.cost.total < costLow) costLow = item.cost.total;
+    if (item.cost.total > costHigh) costHigh = item.cost.total;
   }
-  return [low, high];
+  const ranked: Ranked<T>[] = new Array(items.length);
+  for (let i = 0; i < items.length; i++) {
+    const item = items[i];
+    const scores = {
+      margin: marginHigh > marginLow ? (item.margin - marginLow) / (marginHigh - marginLow) : 1,
+      cost: costHigh > costLow ? (costHigh - item.cost.total) / (costHigh - costLow) : 1,
+      evidence: item.evidence && item.evidence.agrees ? Math.exp(-item.evidence.distance / NEAR_EVIDENCE_DISTANCE) : 0,
+    };
+    ranked[i] = { item, scores, score: (wm * scores.margin + wc * scores.cost + we * scores.evidence) / total };
+  }
+  return ranked.sort((a, b) => b.score - a.score || b.item.margin - a.item.margin);
 }
