@@ -7,6 +7,8 @@ import { fitGelBoundary } from './fit-gel-boundary';
 import { prepareCalibrationPoints } from './prepare-calibration-points';
 import type { CalibrationFit, CalibrationObservation, CalibrationParameter } from './types';
 
+const toThousandth = (value: number) => Math.round(value * 1000) / 1000 + 0;
+
 export interface CalibrationOptions {
   /** What to fit; the attraction shift always, the gel threshold when listed. */
   parameters: CalibrationParameter[];
@@ -41,7 +43,9 @@ export function fitCalibration(observations: CalibrationObservation[], options: 
   requireEnoughObservations(points, fitThreshold);
   const fitOptions = { fitThreshold, threshold: theory.gelB2Threshold };
   const fit = fitGelBoundary(points, fitOptions);
-  const parameters = { attractionShift: fit.attractionShift.value, gelB2Threshold: fit.threshold };
+  // Applied to 0.001 in B2*: far inside any uncertainty a bench gives, and readable where the
+  // map writes the parameters into its labels and notes.
+  const parameters = { attractionShift: toThousandth(fit.attractionShift.value), gelB2Threshold: toThousandth(fit.threshold) };
   const before = agreementTable(points, theory);
   const after = agreementTable(points, parameters);
   const crossValidation = crossValidateCalibration(points, { ...fitOptions, folds: options.folds, seed }, theory);

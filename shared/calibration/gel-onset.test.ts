@@ -1,10 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { buildStateMap, classifyPoint, meanFieldCriticalPoint, meanFieldSpinodal } from '../physics';
+import { buildStateMap, classifyPoint, DEFAULT_STRONGEST_B2, meanFieldCriticalPoint, meanFieldSpinodal } from '../physics';
 import { seededRandom } from '../seeded-random';
 import { gelBoundaryB2 } from './gel-boundary-b2';
 import { gelOnset } from './gel-onset';
 import { gelSideCall } from './gel-side-call';
 import { prepareCalibrationPoints } from './prepare-calibration-points';
+import { strongestReducedB2 } from './strongest-reduced-b2';
 import { thresholdDecides } from './threshold-decides';
 
 const meanField = buildStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' });
@@ -22,6 +23,18 @@ describe('gelOnset', () => {
     const onset = gelOnset(meanField, critical.phi);
     expect(onset.spinodalB2!).toBeCloseTo(-1.6503, 2);
     expect(onset.binodalB2!).toBeCloseTo(-1.6503, 2);
+  });
+
+  it('searches up to the top of each map: B2* = −10 by default on every axis (shared/physics DEFAULT_STRONGEST_B2)', () => {
+    for (const model of [
+      { kind: 'generic', theory: 'meanField', axis: 'b2' },
+      { kind: 'generic', theory: 'baxterPY', axis: 'inverseTau' },
+      { kind: 'generic', theory: 'meanField', axis: 'squareWellDepth', lambda: 1.25 },
+    ] as const) {
+      expect(strongestReducedB2(buildStateMap(model))).toBeCloseTo(DEFAULT_STRONGEST_B2, 9);
+    }
+    const depletion = buildStateMap({ kind: 'depletion', q: 0.4 });
+    expect(strongestReducedB2(depletion)).toBeLessThan(-1.5);
   });
 
   it('has the binodal before the spinodal, and no gel at or above the glass line', () => {

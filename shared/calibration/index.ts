@@ -22,3 +22,4 @@ export { firthLogisticRegression } from './firth-logistic-regression';
 export { stratifiedFolds } from './stratified-folds';
 export { goldenSectionMaximum } from './golden-section-maximum';
 export { waldEstimate, Z_95 } from './wald-estimate';
+export { strongestReducedB2 } from './strongest-reduced-b2';
