@@ -15,6 +15,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/recipes', label: 'Recipes', capability: 'data.read', description: 'Compositions with their predicted state and margin' },
   { to: '/bench', label: 'Bench log', capability: 'data.read', description: 'Observed outcomes beside their predictions; record, import and export' },
   { to: '/shortlists', label: 'Shortlists', capability: 'data.read', description: 'Candidate recipes on their way to approval' },
+  { to: '/calibrate', label: 'Calibrate', capability: 'data.read', description: 'Fit the gel boundary to the bench and choose what the programme predicts with' },
   { to: '/library', label: 'Library', capability: 'data.read', description: 'Particles, depletants, solvents and salts' },
   { to: '/find', label: 'Find', capability: 'data.read', description: 'Look up a recipe and read where it sits' },
   { to: '/team', label: 'Team', capability: 'team.manage', description: 'People, roles, invitations, audit trail, outbox' },

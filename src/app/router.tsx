@@ -33,6 +33,7 @@ const router = createBrowserRouter([
           { path: 'shortlists/:id', lazy: () => import('./routes/shortlist').then((m) => ({ Component: m.ShortlistRoute })) },
           { path: 'library', lazy: () => import('./routes/library').then((m) => ({ Component: m.LibraryRoute })) },
           { path: 'find', lazy: () => import('./routes/find').then((m) => ({ Component: m.FindRoute })) },
+          { path: 'calibrate', lazy: () => import('./routes/calibrate').then((m) => ({ Component: m.CalibrateRoute })) },
           { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },
         ],
       },
