@@ -5,8 +5,10 @@ import { Card, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { useSession } from '@/features/auth/api/get-session';
+import { useCalibrations } from '@/features/calibration/api/get-calibrations';
 import { SafetyNote } from '@/features/cautions/safety-note';
 import { useMapPoints } from '@/features/map/api/get-map-points';
+import { CalibrationSwitch } from '@/features/map/components/calibration-switch';
 import { MapControls } from '@/features/map/components/map-controls';
 import { MapExports } from '@/features/map/components/map-exports';
 import { MapLegend } from '@/features/map/components/map-legend';
@@ -15,11 +17,14 @@ import { PointsTable } from '@/features/map/components/points-table';
 import { StateMap } from '@/features/map/components/state-map';
 import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '@/features/map/geometry/map-view';
 import type { MapPoint, Viewport } from '@/features/map/geometry/types';
+import type { CalibrationOverlay } from '@/features/map/geometry/calibration-lines';
+import { useCalibrationOverlay } from '@/features/map/hooks/use-calibration-overlay';
 import { placePoints, useStateMapDrawing } from '@/features/map/hooks/use-map-drawing';
 import { ProgrammeGate } from '@/features/programmes/components/programme-gate';
 import { ProgrammePicker } from '@/features/programmes/components/programme-picker';
 import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
 import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
+import { formatDate } from '@/lib/format';
 
 function median(values: number[]) {
   if (values.length === 0) return null;
@@ -48,12 +53,19 @@ export function MapRoute() {
 
 function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; canShortlist: boolean }) {
   const points = useMapPoints(programme.id);
-  if (points.isPending) return <Loading label="Loading the programme's points…" />;
+  const calibrations = useCalibrations(programme.id);
+  const inUse = calibrations.data?.inUse ?? null;
+  const calibration = useMemo<CalibrationOverlay | null>(
+    () => (inUse && inUse.acceptedAt ? { parameters: inUse.parameters, shiftStandardError: inUse.attractionShift.standardError, dateLabel: formatDate(inUse.acceptedAt) } : null),
+    [inUse?.id, inUse?.acceptedAt],
+  );
+  if (points.isPending || calibrations.isPending) return <Loading label="Loading the programme's points…" />;
   if (points.isError) return <ErrorState error={points.error} retry={() => points.refetch()} />;
-  return <MapScreen programme={programme} data={points.data} canShortlist={canShortlist} />;
+  if (calibrations.isError) return <ErrorState error={calibrations.error} retry={() => calibrations.refetch()} />;
+  return <MapScreen programme={programme} data={points.data} canShortlist={canShortlist} calibration={calibration} />;
 }
 
-function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean }) {
+function MapScreen({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
   const [params, setParams] = useSearchParams();
   const navigate = useNavigate();
   const sizeRatio = useMemo(() => {
@@ -76,7 +88,15 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
   }, [data]);
   const layersKey = [...view.layers].sort().join(',');
   const layers = useMemo(() => view.layers, [layersKey]);
-  const built = useStateMapDrawing({ view, sizeRatio, strongest });
+  // With an accepted calibration the map is drawn with it unless the view asks for the theory.
+  const drawnCalibrated = calibration !== null && view.calibrated;
+  const built = useStateMapDrawing({ view, sizeRatio, strongest, parameters: drawnCalibrated ? calibration.parameters : undefined });
+  const calibrationLines = useCalibrationOverlay(built.map, calibration, drawnCalibrated);
+  const showCalibration = calibration !== null && layers.has('calibrated');
+  const drawing = useMemo(
+    () => (built.drawing && showCalibration ? { ...built.drawing, lines: [...built.drawing.lines, ...calibrationLines] } : built.drawing),
+    [built.drawing, showCalibration, calibrationLines],
+  );
   const [selected, setSelected] = useState<MapPoint[]>([]);
   // The export buttons need the elements themselves, so keep them in state (a ref would not re-render).
   const [svgElement, setSvgElement] = useState<SVGSVGElement | null>(null);
@@ -107,8 +127,7 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
   );
   const onOpen = useCallback((p: MapPoint) => p.code && navigate(`/recipes/${p.code}`), [navigate]);
 
-  if (!built.map) return <Notice tone="error" title="The map could not be computed">{built.error.message}</Notice>;
-  const drawing = built.drawing;
+  if (!built.map || !drawing) return <Notice tone="error" title="The map could not be computed">{built.error?.message}</Notice>;
   const recipes = placed.points.filter((p) => p.kind === 'recipe').length;
   const observations = placed.points.length - recipes;
   const mismatches = placed.points.filter((p) => p.agrees === false).length;
@@ -122,7 +141,10 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <MapControls view={view} onChange={setView} depletion={depletion} />
+        <div className="flex flex-wrap items-end gap-3">
+          <MapControls view={view} onChange={setView} depletion={depletion} />
+          {calibration && <CalibrationSwitch calibration={calibration} calibrated={view.calibrated} onChange={(calibrated) => setView({ ...view, calibrated })} />}
+        </div>
         <MapExports svg={svgElement} canvas={canvasRef.current} points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} fileStem={`gelwright-${programme.codePrefix.toLowerCase()}-map`} />
       </div>
       <div className="grid gap-5 xl:grid-cols-[minmax(0,1fr)_18rem]">
@@ -142,13 +164,14 @@ function MapScreen({ programme, data, canShortlist }: { programme: ProgrammeView
           />
           <p className="mt-3 text-xs text-ink-soft" data-testid="map-model-note">
             Lines are approximate: {drawing.modelLabel}. {drawing.notes.join(' ')}
+            {drawnCalibrated ? ` Calibrated ${calibration.dateLabel} to the team's bench: still approximate, within the band drawn.` : calibration ? ' Drawn with the uncalibrated theory; the stored predictions of recipes and observations (their shapes and rings) use the calibration.' : ''}
             {placed.skipped > 0 ? ` ${placed.skipped} point${placed.skipped === 1 ? ' has' : 's have'} no coordinate on this axis and ${placed.skipped === 1 ? 'is' : 'are'} not shown.` : ''}
             {offMap > 0 ? ` ${offMap} point${offMap === 1 ? ' lies' : 's lie'} beyond the drawn attraction range (stronger than the map's top) and ${offMap === 1 ? 'is' : 'are'} not shown.` : ''}
           </p>
         </Card>
         <div className="flex flex-col gap-5">
           <Card title="Layers and key">
-            <MapLegend layers={view.layers} onToggle={toggle} available={LAYERS.filter((l) => l !== 'calibrated')} />
+            <MapLegend layers={view.layers} onToggle={toggle} available={LAYERS.filter((l) => l !== 'calibrated' || calibration !== null)} />
           </Card>
           <Card title="Selection">
             <SelectionPanel points={selected} programmeId={programme.id} goalState={programme.goalState} canShortlist={canShortlist} onClear={() => setSelected([])} />

@@ -19,7 +19,8 @@ const TONE: Record<MapLine['tone'], { stroke: string; width: number }> = {
   glass: { stroke: '#7d55b8', width: 1.8 },
   crystal: { stroke: '#c27a1c', width: 1.8 },
   gel: { stroke: '#1c8a63', width: 1.8 },
-  calibrated: { stroke: '#b7791f', width: 2.4 },
+  // Dark brick: apart from the crystal lines' amber-brown and every other tone.
+  calibrated: { stroke: '#862b2b', width: 2.4 },
 };
 
 function pathOf(points: XY[], scales: MapScales) {
