@@ -62,7 +62,8 @@ export function placeLineLabels(lines: { id: string; label: string; points: XY[]
   const named = new Set<string>();
   for (const line of lines) {
     if (named.has(line.label)) continue;
-    const width = Math.min(260, line.label.length * 5.6);
+    // About 5.8 px per character at 10.5 px: the whole label must fit the spot, however long.
+    const width = line.label.length * 5.8;
     const visible = line.points
       .map(([x, y]) => [scales.x(x), scales.y(y)] as [number, number])
       .filter(([px, py]) => px > 4 && py > 14 && px < scales.inner.width - 4 && py < scales.inner.height - 4);
