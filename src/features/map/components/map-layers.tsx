@@ -157,7 +157,7 @@ export function MapAxes({ scales, xLabel, yLabel, displayY }: { scales: MapScale
         {xTicks.map((t) => (
           <g key={t} transform={`translate(${scales.x(t)},0)`}>
             <line y2={5} stroke="#7b858f" />
-            <text y={18} textAnchor="middle">
+            <text y={18} textAnchor="middle" data-axis-tick="x">
               {formatNumber(t, 3)}
             </text>
           </g>
@@ -169,7 +169,7 @@ export function MapAxes({ scales, xLabel, yLabel, displayY }: { scales: MapScale
       {yTicks.map((t) => (
         <g key={t} transform={`translate(0,${scales.y(t)})`}>
           <line x2={-5} stroke="#7b858f" />
-          <text x={-8} dy="0.32em" textAnchor="end">
+          <text x={-8} dy="0.32em" textAnchor="end" data-axis-tick="y">
             {formatNumber(displayY(t), 3)}
           </text>
         </g>
