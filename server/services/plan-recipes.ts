@@ -42,8 +42,9 @@ async function makeRecipes(ctx: Ctx, plan: LoadedPlan, kind: 'candidate' | 'expe
   return recipes;
 }
 
-const candidateReason = (c: PlanCandidateView, unit: string) =>
-  `Planned: predicted ${STATE_LABELS[c.predictedState].toLowerCase()} with margin ${round(c.margin, 2)} at φ ${c.phi.toFixed(3)}, ${doseText(c.level, unit)}; about ${round(c.costPerLitre.total, 3)} per litre in materials.`;
+const candidateSummary = (c: PlanCandidateView, unit: string) =>
+  `predicted ${STATE_LABELS[c.predictedState].toLowerCase()} with margin ${round(c.margin, 2)} at φ ${c.phi.toFixed(3)}, ${doseText(c.level, unit)}; about ${round(c.costPerLitre.total, 3)} per litre in materials.`;
+const candidateReason = (planId: number, c: PlanCandidateView, unit: string) => `From plan ${planId}: ${candidateSummary(c, unit)}`;
 
 /**
  * Turns chosen candidates of a plan into recipes (origin `plan:<id>`) and, when asked, puts them
@@ -58,11 +59,11 @@ export async function makePlanRecipes(ctx: Ctx, planId: number, input: PlanRecip
   const recipes = await makeRecipes(ctx, plan, 'candidate', chosen.map((c) => ({
     index: c.index, phi: c.phi, level: c.level,
     name: `${STATE_LABELS[plan.targetState]} candidate ${c.index + 1}: φ ${c.phi.toFixed(3)}, ${doseText(c.level, unit)}`,
-    notes: `From plan ${plan.id} (${plan.title}), candidate ${c.index + 1}. ${candidateReason(c, unit)} A prediction from approximate theory: test before relying on it.`,
+    notes: `From plan ${plan.id} (${plan.title}), candidate ${c.index + 1}: ${candidateSummary(c, unit)} A prediction from approximate theory: test before relying on it.`,
   })));
   let shortlist = null;
   if (input.shortlist) {
-    const items = recipes.map((r, k) => ({ recipeId: r.id, reason: candidateReason(chosen[k], unit) }));
+    const items = recipes.map((r, k) => ({ recipeId: r.id, reason: candidateReason(plan.id, chosen[k], unit) }));
     if (input.shortlist.mode === 'new') {
       shortlist = await createShortlist(ctx, { programmeId: plan.programmeId, title: input.shortlist.title, purpose: input.shortlist.purpose ?? `Candidates from plan ${plan.id}: ${plan.title}`, targetState: plan.targetState, items });
     } else {

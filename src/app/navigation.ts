@@ -14,6 +14,7 @@ export const NAV_ITEMS: NavItem[] = [
   { to: '/map', label: 'State map', capability: 'data.read', description: 'Recipes and bench outcomes on the computed state diagram' },
   { to: '/recipes', label: 'Recipes', capability: 'data.read', description: 'Compositions with their predicted state and margin' },
   { to: '/bench', label: 'Bench log', capability: 'data.read', description: 'Observed outcomes beside their predictions; record, import and export' },
+  { to: '/plan', label: 'Planner', capability: 'data.read', description: 'From a target state to ranked compositions, and the next experiments to run' },
   { to: '/shortlists', label: 'Shortlists', capability: 'data.read', description: 'Candidate recipes on their way to approval' },
   { to: '/calibrate', label: 'Calibrate', capability: 'data.read', description: 'Fit the gel boundary to the bench and choose what the programme predicts with' },
   { to: '/library', label: 'Library', capability: 'data.read', description: 'Particles, depletants, solvents and salts' },

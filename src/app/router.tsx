@@ -34,6 +34,7 @@ const router = createBrowserRouter([
           { path: 'library', lazy: () => import('./routes/library').then((m) => ({ Component: m.LibraryRoute })) },
           { path: 'find', lazy: () => import('./routes/find').then((m) => ({ Component: m.FindRoute })) },
           { path: 'calibrate', lazy: () => import('./routes/calibrate').then((m) => ({ Component: m.CalibrateRoute })) },
+          { path: 'plan', lazy: () => import('./routes/plan').then((m) => ({ Component: m.PlanRoute })) },
           { path: '*', lazy: () => import('./routes/not-found').then((m) => ({ Component: m.NotFoundRoute })) },
         ],
       },

@@ -170,7 +170,7 @@ describe('POST /api/plans/:id/recipes', () => {
     }
     expect(shortlist).toMatchObject({ status: 'draft', targetState: 'gel', title: 'Planned gels for the shelf test', programmeId: programme.id });
     expect(shortlist.items.map((i) => i.recipeId)).toEqual(recipes.map((r) => r.id));
-    expect(shortlist.items[0].reason).toMatch(/^Planned: predicted gel with margin/);
+    expect(shortlist.items[0].reason).toMatch(new RegExp(`^From plan ${stored.id}: predicted gel with margin`));
     expect(await AuditEvent.count({ where: { action: 'plan.recipes_made', entityId: String(stored.id) } })).toBe(before + 1);
 
     const seen = (await agents.manager.agent.get(`/api/plans/${stored.id}`)).body.plan as PlanView;

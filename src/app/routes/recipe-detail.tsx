@@ -41,6 +41,7 @@ export function RecipeDetailRoute() {
           <span className="inline-flex flex-wrap items-center gap-2">
             <StateBadge state={r.derived.predictedState} prefix="Predicted" />
             {r.archived && <span className="text-amber-700">Archived</span>}
+            {r.origin?.startsWith('plan:') && <Link to={`/plan?programme=${r.programmeId}&plan=${r.origin.slice(5)}`}>From plan {r.origin.slice(5)}</Link>}
             <span>Created by {r.createdBy?.name ?? 'someone'} · updated {r.updatedAt.slice(0, 10)}</span>
           </span>
         }

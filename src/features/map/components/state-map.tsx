@@ -7,7 +7,7 @@ import { createHitIndex } from '../geometry/hit-index';
 import type { Layer } from '../geometry/map-view';
 import { paintPoints } from '../geometry/point-painter';
 import { gridRegions } from '../geometry/regions';
-import { mapScales, type MapFrame } from '../geometry/scales';
+import { mapScales, type MapFrame, type MapScales } from '../geometry/scales';
 import type { MapDrawing, MapPoint, Viewport } from '../geometry/types';
 import { HoverCard } from './hover-card';
 import { MapAxes, MapLayers } from './map-layers';
@@ -29,6 +29,8 @@ export interface StateMapProps {
   interactive?: boolean;
   svgRef?: React.Ref<SVGSVGElement>;
   canvasRef?: React.RefObject<HTMLCanvasElement | null>;
+  /** Extra shapes drawn over the regions and lines, under the points, clipped to the plot (e.g. a planner's window). */
+  decorations?: (scales: MapScales) => React.ReactNode;
 }
 
 declare global {
@@ -46,7 +48,7 @@ declare global {
  * canvas over it, wheel/drag to zoom and pan (d3-zoom), a brush to select (d3-brush),
  * hover for a card and click to open a record.
  */
-export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected, onSelect, onOpen, height = 560, ariaLabel, interactive = true, svgRef, canvasRef }: StateMapProps) {
+export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected, onSelect, onOpen, height = 560, ariaLabel, interactive = true, svgRef, canvasRef, decorations }: StateMapProps) {
   const clipId = useId().replace(/:/g, '');
   const wrapper = useRef<HTMLDivElement>(null);
   const overlay = useRef<SVGRectElement>(null);
@@ -192,6 +194,7 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
           <title>{ariaLabel}</title>
           <g transform={`translate(${MARGIN.left},${MARGIN.top})`}>
             <MapLayers drawing={drawing} regions={regions} scales={scales} layers={layers} clipId={clipId} />
+            {decorations && <g clipPath={`url(#${clipId})`}>{decorations(scales)}</g>}
             <MapAxes scales={scales} xLabel={drawing.xLabel} yLabel={drawing.yLabel} displayY={drawing.displayY} />
             <g data-points-layer />
           </g>

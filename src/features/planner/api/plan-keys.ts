@@ -1,0 +1,11 @@
+/** Query keys for plans: a programme's list, and one plan with everything it found. */
+export const planKeys = {
+  all: ['plans'] as const,
+  lists: () => [...planKeys.all, 'list'] as const,
+  list: (programmeId: number) => [...planKeys.lists(), { programme: programmeId }] as const,
+  details: () => [...planKeys.all, 'detail'] as const,
+  detail: (id: number) => [...planKeys.details(), id] as const,
+};
+
+/** Other screens' caches a plan's recipes change (by their key prefixes): recipes, shortlists, the map overlay. */
+export const CHANGED_BY_PLAN_RECIPES = [['recipes'], ['shortlists'], ['map-points']] as const;

@@ -1,0 +1,22 @@
+import { STATE_LABELS } from '@shared/states';
+import type { CostPerLitre, NearestEvidence } from '@shared/planning/types';
+import type { PlanView } from '@shared/views/plan';
+import { formatNumber } from '@/lib/format';
+
+/** "Polymer (g/L)" or "Salt (mM)": the dose column of a plan. */
+export const doseHeading = (plan: PlanView) => `${plan.source === 'depletion' ? 'Polymer' : 'Salt'} (${plan.levelUnit})`;
+
+/** The dose as written on a recipe: "8.46 g/L PEG 20 kg/mol". */
+export const doseText = (plan: PlanView, level: number) => `${formatNumber(level, 3)} ${plan.levelUnit} ${plan.materials.depletant ?? plan.materials.salt ?? ''}`.trim();
+
+/** Cost per litre with the materials that had no price. */
+export function costText(cost: CostPerLitre): string {
+  const total = formatNumber(cost.total, 3);
+  return cost.unpriced.length ? `${total} (no price: ${cost.unpriced.join(', ')})` : total;
+}
+
+/** The nearest bench evidence in words. */
+export function evidenceText(evidence: NearestEvidence | null): string {
+  if (!evidence) return 'No bench samples yet';
+  return `${evidence.label}: ${STATE_LABELS[evidence.observedState].toLowerCase()} at ${formatNumber(evidence.ageDays, 3)} d, ${formatNumber(evidence.distance, 2)} away`;
+}
