@@ -8,7 +8,8 @@ import type { Config } from '../config';
 import { Attachment, Depletant, Observation, ParticleSystem, Programme, Recipe, Salt, Shortlist, ShortlistEvent, ShortlistItem, Solvent, type User } from '../models';
 import { attractionColumns } from '../presenters/recipe';
 import { recordAudit } from '../services/audit';
-import { deriveForRecipe } from '../services/predictions';
+import { deriveForRecipe, recipeMaterials } from '../services/predictions';
+import { deriveRecipe, recipeStateMap } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 import { demoMicrograph } from './micrograph';
 
@@ -39,10 +40,19 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
   await Salt.create({ name: 'Calcium chloride', valence: 2, molarMassGMol: 110.98, pricePerKg: 0.6, notes: 'Divalent: screens far more strongly per mole.', createdBy: by(people.formulator) }, t);
 
   const recipes: Recipe[] = [];
+  /**
+   * The invented bench is a little stickier than the theory (a B2* shift of 0.6): outcomes follow
+   * that "reality", with surprises mostly near its boundaries — so the Calibrate screen has a
+   * real shift to find in the demo.
+   */
+  const TEAM_REALITY = { attractionShift: 0.6 };
+  const reality = new Map<number, { state: PredictedState; margin: number }>();
   const nextCode = new Map<number, number>([[primer.id, 1], [slurry.id, 1]]);
   async function addRecipe(programme: Programme, name: string, input: Omit<RecipeInput, 'programmeId' | 'name'>, author: User) {
     const full: RecipeInput = { programmeId: programme.id, name, ...input };
     const derived = await deriveForRecipe(full, transaction);
+    const materials = await recipeMaterials(full, transaction);
+    const truth = deriveRecipe(full, materials, { parameters: TEAM_REALITY, map: recipeStateMap(full, materials, TEAM_REALITY) });
     const number = nextCode.get(programme.id)!;
     nextCode.set(programme.id, number + 1);
     const recipe = await Recipe.create(
@@ -70,6 +80,7 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
       t,
     );
     recipes.push(recipe);
+    reality.set(recipe.id, { state: truth.predictedState ?? 'fluid', margin: truth.margin ?? 1 });
     return recipe;
   }
 
@@ -102,7 +113,7 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
     await programme.save(t);
   }
 
-  // Bench outcomes at several ages; mostly what was predicted, sometimes not.
+  // Bench outcomes at several ages: the team's reality, mostly as predicted, surprises near boundaries.
   const ages = [0, 1, 7, 30, 90];
   const observations: Observation[] = [];
   const neighbours: Record<PredictedState, ObservedState[]> = {
@@ -113,13 +124,14 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
     separated: ['gel', 'fluid'],
   };
   for (const recipe of recipes) {
-    const predicted = recipe.predictedState ?? 'fluid';
+    const truth = reality.get(recipe.id)!;
     const mixedAt = new Date(Date.UTC(2026, 5 + Math.floor(random() * 5), 1 + Math.floor(random() * 27)));
-    const surprising = random() < 0.12;
+    // Near a boundary a sample can land either side; far from one it almost never does.
+    const surprising = random() < 0.35 * Math.exp(-truth.margin / 0.05);
     const picked = ages.filter((age, i) => i === 0 || random() < 0.75);
     for (const ageDays of picked) {
-      let state: ObservedState = surprising && ageDays > 0 ? neighbours[predicted][Math.floor(random() * 2)] : predicted;
-      if (predicted === 'gel' && recipe.phi < 0.1 && ageDays >= 30 && random() < 0.6) state = 'collapsed';
+      let state: ObservedState = surprising && ageDays > 0 ? neighbours[truth.state][Math.floor(random() * 2)] : truth.state;
+      if (truth.state === 'gel' && recipe.phi < 0.1 && ageDays >= 30 && random() < 0.6) state = 'collapsed';
       if (random() < 0.03) state = 'unclear';
       const method: ObservationMethod = state === 'gel' && random() < 0.6 ? 'rheology' : random() < 0.15 ? 'microscopy' : 'visual';
       observations.push(

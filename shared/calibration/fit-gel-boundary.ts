@@ -8,6 +8,15 @@ import { thresholdDecides } from './threshold-decides';
 import type { CalibrationPoint, FitMethod, GelBoundaryFit } from './types';
 import { waldEstimate } from './wald-estimate';
 
+/**
+ * Distances beyond this (in B2*) are treated as this far: a sample 40 or 250 units of B2* past the
+ * boundary says no more about where the boundary lies than one 20 units past it, and leaving such
+ * distances in saturates the fitted probabilities (weights → 0) and derails the fit. Winsorising
+ * a covariate at fixed limits is common practice for outlying predictors.
+ */
+export const DISTANCE_LIMIT = 20;
+const winsorised = (x: number) => Math.max(-DISTANCE_LIMIT, Math.min(DISTANCE_LIMIT, x));
+
 /** Grid points of the first pass over the threshold; the best is refined by golden section. */
 const THRESHOLD_GRID = 80;
 /** The classifier accepts gel thresholds in [−100, 1] (resolveClassifierParameters). */
@@ -54,7 +63,7 @@ export interface GelBoundaryFitOptions {
  */
 export function fitGelBoundary(points: CalibrationPoint[], options: GelBoundaryFitOptions): GelBoundaryFit {
   const outcomes = points.map((p) => p.outcome);
-  const features = (t: number) => points.map((p) => [gelBoundaryB2(p.onset, t)! - p.reducedB2]);
+  const features = (t: number) => points.map((p) => [winsorised(gelBoundaryB2(p.onset, t)! - p.reducedB2)]);
   const fitAt = (t: number, method: FitMethod): LogisticFit | null => {
     try {
       return method === 'firth' ? firthLogisticRegression(features(t), outcomes) : logisticRegression(features(t), outcomes);
@@ -177,7 +186,7 @@ function informationInverse(points: CalibrationPoint[], coefficients: number[], 
   const k = withThreshold ? 3 : 2;
   const information = Array.from({ length: k }, () => new Array(k).fill(0));
   for (const p of points) {
-    const x = gelBoundaryB2(p.onset, threshold)! - p.reducedB2;
+    const x = winsorised(gelBoundaryB2(p.onset, threshold)! - p.reducedB2);
     const probability = 1 / (1 + Math.exp(-(b0 + b1 * x)));
     const weight = probability * (1 - probability);
     const z = withThreshold ? [1, x, thresholdDecides(p.onset, threshold) ? b1 : 0] : [1, x];
