@@ -45,28 +45,24 @@ function PlannerScreen({ programme, canPlan }: { programme: ProgrammeView; canPl
   });
   return (
     <div className="flex flex-col gap-5">
-      <div className="grid gap-5 xl:grid-cols-[minmax(22rem,30rem)_minmax(0,1fr)]">
-        {canPlan ? (
-          <Card title="What to plan">
-            <PlanFormLoader programme={programme} from={shown} onPlanned={(p) => open(p.id)} />
-          </Card>
-        ) : (
-          <Notice title="Plans are made by formulators">You can read every plan of this programme and where its recipes came from; formulators and administrators run the planner.</Notice>
-        )}
-        <div className="flex flex-col gap-5">
-          {planId === null ? (
-            <EmptyState title="No plan open">{canPlan ? 'Fill in what you want and choose Plan compositions, or open an earlier plan below.' : 'Open a plan from the list below.'}</EmptyState>
-          ) : plan.isPending ? (
-            <Loading label="Loading the plan…" />
-          ) : plan.isError ? (
-            <ErrorState error={plan.error} retry={() => plan.refetch()} />
-          ) : shown ? (
-            <PlanResult plan={shown} canPlan={canPlan} onPlanned={(p) => open(p.id)} />
-          ) : (
-            <Notice tone="warning">That plan belongs to another programme; choose it above to see it.</Notice>
-          )}
-        </div>
-      </div>
+      {canPlan ? (
+        <Card title="What to plan">
+          <PlanFormLoader programme={programme} from={shown} onPlanned={(p) => open(p.id)} />
+        </Card>
+      ) : (
+        <Notice title="Plans are made by formulators">You can read every plan of this programme and where its recipes came from; formulators and administrators run the planner.</Notice>
+      )}
+      {planId === null ? (
+        <EmptyState title="No plan open">{canPlan ? 'Fill in what you want and choose Plan compositions, or open an earlier plan below.' : 'Open a plan from the list below.'}</EmptyState>
+      ) : plan.isPending ? (
+        <Loading label="Loading the plan…" />
+      ) : plan.isError ? (
+        <ErrorState error={plan.error} retry={() => plan.refetch()} />
+      ) : shown ? (
+        <PlanResult key={shown.id} plan={shown} canPlan={canPlan} onPlanned={(p) => open(p.id)} />
+      ) : (
+        <Notice tone="warning">That plan belongs to another programme; choose it above to see it.</Notice>
+      )}
       <Card title="Plans of this programme">
         <PlanHistory programmeId={programme.id} current={shown?.id ?? null} onOpen={open} />
       </Card>
@@ -102,24 +98,27 @@ function PlanResult({ plan, canPlan, onPlanned }: { plan: PlanView; canPlan: boo
   };
   return (
     <>
-      <Card title={`Plan ${plan.id} · ${plan.title}`}>
-        <PlanOverview plan={plan} />
-      </Card>
-      <Card title="On the state map">
-        <PlanMap
-          model={plan.map.model}
-          parameters={plan.map.parameters}
-          polydispersity={plan.map.polydispersity}
-          searched={plan.outcome.window.searched}
-          feasible={plan.outcome.window.feasible}
-          candidates={marks.candidates}
-          experiments={marks.experiments}
-          title={`plan ${plan.id}`}
-        />
-        <p className="mt-3 text-xs text-ink-soft" data-testid="plan-map-key">
-          Dashed outline: the ranges searched. Shaded: where the {target} is predicted with at least the margin asked (the feasible window). Numbered discs: candidates, filled once made into recipes. Numbered diamonds: next experiments. Lines are approximate theory{plan.calibration ? ', calibrated to the bench' : ''}.
-        </p>
-      </Card>
+      <div className="grid gap-5 lg:grid-cols-2">
+        <Card title={`Plan ${plan.id} · ${plan.title}`}>
+          <PlanOverview plan={plan} />
+        </Card>
+        <Card title="On the state map">
+          <PlanMap
+            model={plan.map.model}
+            parameters={plan.map.parameters}
+            polydispersity={plan.map.polydispersity}
+            searched={plan.outcome.window.searched}
+            feasible={plan.outcome.window.feasible}
+            candidates={marks.candidates}
+            experiments={marks.experiments}
+            title={`plan ${plan.id}`}
+            height={420}
+          />
+          <p className="mt-3 text-xs text-ink-soft" data-testid="plan-map-key">
+            Dashed outline: the ranges searched. Shaded: where the {target} is predicted with at least the margin asked (the feasible window). Numbered discs: candidates, filled once made into recipes. Numbered diamonds: next experiments. Lines are approximate theory{plan.calibration ? ', calibrated to the bench' : ''}.
+          </p>
+        </Card>
+      </div>
       {plan.outcome.feasible ? (
         <Card title="Ranked candidates">
           <PlanCandidates plan={plan} canMake={canPlan} />

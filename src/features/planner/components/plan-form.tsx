@@ -76,126 +76,129 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
   return (
     <form onSubmit={submit} noValidate aria-label="Plan" className="flex flex-col gap-4">
       {formError && <Notice tone="error">{formError}</Notice>}
-      <div className="grid gap-4 sm:grid-cols-2">
-        <Field label="Target state" error={errors.targetState?.message}>
-          {(p) => (
-            <SelectInput {...p} {...register('targetState')}>
-              {GOAL_STATES.map((s) => (
-                <option key={s} value={s}>
-                  {STATE_LABELS[s]}
-                </option>
-              ))}
-            </SelectInput>
+      <div className="grid gap-4 lg:grid-cols-[3fr_2fr_2fr]">
+        <fieldset className="grid content-start gap-4 rounded-card border border-line p-4 sm:grid-cols-2">
+          <legend className="px-1 text-sm font-semibold">Target and materials</legend>
+          <Field label="Target state" error={errors.targetState?.message}>
+            {(p) => (
+              <SelectInput {...p} {...register('targetState')}>
+                {GOAL_STATES.map((s) => (
+                  <option key={s} value={s}>
+                    {STATE_LABELS[s]}
+                  </option>
+                ))}
+              </SelectInput>
+            )}
+          </Field>
+          <Field label="Plan title (optional)" error={errors.title?.message}>
+            {(p) => <TextInput {...p} placeholder="Named after the materials" {...register('title')} />}
+          </Field>
+          <Field label="Particle system" error={errors.particleId?.message} className="sm:col-span-2">
+            {(p) => (
+              <SelectInput {...p} disabled={loading} {...register('particleId', num)}>
+                {(particles.data ?? []).map((m) => (
+                  <option key={m.id} value={m.id}>
+                    {m.name} (radius {m.radiusNm} nm)
+                  </option>
+                ))}
+              </SelectInput>
+            )}
+          </Field>
+          <Field label="Solvent" error={errors.solventId?.message}>
+            {(p) => (
+              <SelectInput {...p} disabled={loading} {...register('solventId', num)}>
+                {(solvents.data ?? []).map((m) => (
+                  <option key={m.id} value={m.id}>
+                    {m.name}
+                  </option>
+                ))}
+              </SelectInput>
+            )}
+          </Field>
+          <Field label="Temperature (°C)" error={errors.temperatureC?.message}>
+            {(p) => <TextInput {...p} type="number" step="any" {...register('temperatureC', num)} />}
+          </Field>
+          <div role="radiogroup" aria-label="What makes the particles stick" className="flex flex-wrap gap-2 sm:col-span-2">
+            {(
+              [
+                ['depletion', 'Non-adsorbing polymer'],
+                ['salt', 'Salt'],
+              ] as const
+            ).map(([value, label]) => (
+              <label key={value} className={`cursor-pointer rounded-md border px-3 py-1.5 text-sm ${source === value ? 'border-fjord-500 bg-fjord-50 font-medium' : 'border-line-strong'}`}>
+                <input type="radio" className="sr-only" name="plan-source" value={value} checked={source === value} onChange={() => switchSource(value)} />
+                {label}
+              </label>
+            ))}
+          </div>
+          {source === 'depletion' ? (
+            <Field label="Polymer (depletant)" error={a.depletantId?.message} className="sm:col-span-2">
+              {(p) => (
+                <SelectInput {...p} disabled={loading} {...register('attraction.depletantId', num)}>
+                  {(depletants.data ?? []).map((d) => (
+                    <option key={d.id} value={d.id}>
+                      {d.name}
+                    </option>
+                  ))}
+                </SelectInput>
+              )}
+            </Field>
+          ) : (
+            <Field label="Salt" error={a.saltId?.message} className="sm:col-span-2">
+              {(p) => (
+                <SelectInput {...p} disabled={loading} {...register('attraction.saltId', num)}>
+                  {(salts.data ?? []).map((s) => (
+                    <option key={s.id} value={s.id}>
+                      {s.name} (valence {s.valence})
+                    </option>
+                  ))}
+                </SelectInput>
+              )}
+            </Field>
           )}
-        </Field>
-        <Field label="Plan title (optional)" error={errors.title?.message}>
-          {(p) => <TextInput {...p} placeholder="Named after the materials" {...register('title')} />}
-        </Field>
+        </fieldset>
+        <fieldset className="grid content-start gap-4 rounded-card border border-line p-4 sm:grid-cols-2">
+          <legend className="px-1 text-sm font-semibold">Where to search</legend>
+          <Field label="φ from" error={errors.phi?.min?.message}>
+            {(p) => <TextInput {...p} type="number" step="any" inputMode="decimal" {...register('phi.min', num)} />}
+          </Field>
+          <Field label="φ to" error={errors.phi?.max?.message}>
+            {(p) => <TextInput {...p} type="number" step="any" inputMode="decimal" {...register('phi.max', num)} />}
+          </Field>
+          <Field key={`${source}-from`} label={`${doseName} from (${unit})`} error={dose?.min?.message}>
+            {(p) => <TextInput {...p} type="number" step="any" {...register(source === 'depletion' ? 'attraction.concentrationGL.min' : 'attraction.concentrationMM.min', num)} />}
+          </Field>
+          <Field key={`${source}-to`} label={`${doseName} to (${unit})`} error={dose?.max?.message}>
+            {(p) => <TextInput {...p} type="number" step="any" {...register(source === 'depletion' ? 'attraction.concentrationGL.max' : 'attraction.concentrationMM.max', num)} />}
+          </Field>
+          <Field label="Smallest margin" hint="Distance to the nearest boundary that changes the state, in map units (the map is a unit square)." error={errors.minMargin?.message} className="sm:col-span-2">
+            {(p) => <TextInput {...p} type="number" step="any" {...register('minMargin', num)} />}
+          </Field>
+        </fieldset>
+        <fieldset className="grid content-start gap-4 rounded-card border border-line p-4 sm:grid-cols-2">
+          <legend className="px-1 text-sm font-semibold">What to list</legend>
+          <Field label="Ranking" hint="How candidates that meet the request are ordered." className="sm:col-span-2">
+            {(p) => (
+              <SelectInput {...p} value={ranking} onChange={(event) => setRanking(event.target.value as keyof typeof RANKINGS)}>
+                {Object.entries(RANKINGS).map(([key, r]) => (
+                  <option key={key} value={key}>
+                    {r.label}
+                  </option>
+                ))}
+              </SelectInput>
+            )}
+          </Field>
+          <Field label="Candidates to list" error={errors.candidateCount?.message}>
+            {(p) => <TextInput {...p} type="number" step={1} min={1} max={PLAN_LIMITS.candidates} {...register('candidateCount', num)} />}
+          </Field>
+          <Field label="Next experiments to propose" error={errors.experimentCount?.message}>
+            {(p) => <TextInput {...p} type="number" step={1} min={0} max={PLAN_LIMITS.experiments} {...register('experimentCount', num)} />}
+          </Field>
+        </fieldset>
       </div>
-      <fieldset className="grid gap-4 rounded-card border border-line p-4 sm:grid-cols-2">
-        <legend className="px-1 text-sm font-semibold">Materials</legend>
-        <Field label="Particle system" error={errors.particleId?.message}>
-          {(p) => (
-            <SelectInput {...p} disabled={loading} {...register('particleId', num)}>
-              {(particles.data ?? []).map((m) => (
-                <option key={m.id} value={m.id}>
-                  {m.name} (radius {m.radiusNm} nm)
-                </option>
-              ))}
-            </SelectInput>
-          )}
-        </Field>
-        <Field label="Solvent" error={errors.solventId?.message}>
-          {(p) => (
-            <SelectInput {...p} disabled={loading} {...register('solventId', num)}>
-              {(solvents.data ?? []).map((m) => (
-                <option key={m.id} value={m.id}>
-                  {m.name}
-                </option>
-              ))}
-            </SelectInput>
-          )}
-        </Field>
-        <div role="radiogroup" aria-label="What makes the particles stick" className="flex flex-wrap gap-2 sm:col-span-2">
-          {(
-            [
-              ['depletion', 'Non-adsorbing polymer'],
-              ['salt', 'Salt'],
-            ] as const
-          ).map(([value, label]) => (
-            <label key={value} className={`cursor-pointer rounded-md border px-3 py-1.5 text-sm ${source === value ? 'border-fjord-500 bg-fjord-50 font-medium' : 'border-line-strong'}`}>
-              <input type="radio" className="sr-only" name="plan-source" value={value} checked={source === value} onChange={() => switchSource(value)} />
-              {label}
-            </label>
-          ))}
-        </div>
-        {source === 'depletion' ? (
-          <Field label="Polymer (depletant)" error={a.depletantId?.message}>
-            {(p) => (
-              <SelectInput {...p} disabled={loading} {...register('attraction.depletantId', num)}>
-                {(depletants.data ?? []).map((d) => (
-                  <option key={d.id} value={d.id}>
-                    {d.name}
-                  </option>
-                ))}
-              </SelectInput>
-            )}
-          </Field>
-        ) : (
-          <Field label="Salt" error={a.saltId?.message}>
-            {(p) => (
-              <SelectInput {...p} disabled={loading} {...register('attraction.saltId', num)}>
-                {(salts.data ?? []).map((s) => (
-                  <option key={s.id} value={s.id}>
-                    {s.name} (valence {s.valence})
-                  </option>
-                ))}
-              </SelectInput>
-            )}
-          </Field>
-        )}
-        <Field label="Temperature (°C)" error={errors.temperatureC?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" {...register('temperatureC', num)} />}
-        </Field>
-      </fieldset>
-      <fieldset className="grid gap-4 rounded-card border border-line p-4 sm:grid-cols-2">
-        <legend className="px-1 text-sm font-semibold">Where to search</legend>
-        <Field label="φ from" error={errors.phi?.min?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" inputMode="decimal" {...register('phi.min', num)} />}
-        </Field>
-        <Field label="φ to" error={errors.phi?.max?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" inputMode="decimal" {...register('phi.max', num)} />}
-        </Field>
-        <Field key={`${source}-from`} label={`${doseName} from (${unit})`} error={dose?.min?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" {...register(source === 'depletion' ? 'attraction.concentrationGL.min' : 'attraction.concentrationMM.min', num)} />}
-        </Field>
-        <Field key={`${source}-to`} label={`${doseName} to (${unit})`} error={dose?.max?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" {...register(source === 'depletion' ? 'attraction.concentrationGL.max' : 'attraction.concentrationMM.max', num)} />}
-        </Field>
-        <Field label="Smallest margin" hint="Distance to the nearest boundary that changes the state, in map units (the map is a unit square)." error={errors.minMargin?.message}>
-          {(p) => <TextInput {...p} type="number" step="any" {...register('minMargin', num)} />}
-        </Field>
-        <Field label="Ranking" hint="How candidates that meet the request are ordered.">
-          {(p) => (
-            <SelectInput {...p} value={ranking} onChange={(event) => setRanking(event.target.value as keyof typeof RANKINGS)}>
-              {Object.entries(RANKINGS).map(([key, r]) => (
-                <option key={key} value={key}>
-                  {r.label}
-                </option>
-              ))}
-            </SelectInput>
-          )}
-        </Field>
-        <Field label="Candidates to list" error={errors.candidateCount?.message}>
-          {(p) => <TextInput {...p} type="number" step={1} min={1} max={PLAN_LIMITS.candidates} {...register('candidateCount', num)} />}
-        </Field>
-        <Field label="Next experiments to propose" error={errors.experimentCount?.message}>
-          {(p) => <TextInput {...p} type="number" step={1} min={0} max={PLAN_LIMITS.experiments} {...register('experimentCount', num)} />}
-        </Field>
-      </fieldset>
       <details className="rounded-card border border-line p-4">
         <summary className="cursor-pointer text-sm font-semibold">Prices for this plan only (per kg; blank uses the library)</summary>
-        <div className="mt-3 grid gap-4 sm:grid-cols-2">
+        <div className="mt-3 grid gap-4 sm:grid-cols-3">
           <Field label="Particles price per kg" error={errors.prices?.particles?.message}>
             {(p) => <TextInput {...p} type="number" step="any" min={0} placeholder={pricePlaceholder(libraryPrice(particles.data, particleId))} {...register('prices.particles', num)} />}
           </Field>

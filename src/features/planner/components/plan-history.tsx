@@ -38,8 +38,9 @@ export function PlanHistory({ programmeId, current, onOpen }: { programmeId: num
             <Td>{p.calibrationId ? `calibration ${p.calibrationId}` : 'theory'}</Td>
             <Td>{p.createdBy?.name ?? '—'}</Td>
             <Td>
-              <Button size="sm" variant="quiet" onClick={() => onOpen(p.id)} aria-label={`Open plan ${p.id}`} disabled={p.id === current}>
+              <Button size="sm" variant="quiet" onClick={() => onOpen(p.id)} disabled={p.id === current}>
                 {p.id === current ? 'Shown' : 'Open'}
+                <span className="sr-only"> plan {p.id}</span>
               </Button>
             </Td>
           </tr>
