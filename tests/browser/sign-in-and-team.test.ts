@@ -7,7 +7,7 @@ import { withBrowserStack } from '../support/browser-suite';
 const suite = withBrowserStack();
 
 /** What the rail shows each role: every screen reads data; only administrators manage the team. */
-const SHARED_SCREENS = ['Overview', 'State map', 'Recipes', 'Bench log', 'Shortlists', 'Calibrate', 'Library', 'Find'];
+const SHARED_SCREENS = ['Overview', 'State map', 'Recipes', 'Bench log', 'Planner', 'Shortlists', 'Calibrate', 'Library', 'Find'];
 const NAV_FOR: Record<(typeof ROLES)[number], string[]> = {
   admin: [...SHARED_SCREENS, 'Team'],
   manager: SHARED_SCREENS,
