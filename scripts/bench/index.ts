@@ -112,7 +112,7 @@ Machine: ${machine}. The machine is shared: figures vary from run to run; each r
 | planning 10,000 candidate compositions | under 200 ms | see below (each line says) | see below |
 
 The load generator (autocannon), MariaDB and the app share the same two cores here, so the API
-latencies include queueing behind the load generator itself; \`docs/scaling.md\` says how the
+figures measure that whole arrangement, not the app alone; \`docs/scaling.md\` says how the
 layout grows when a target is missed.
 
 ## API on loopback (autocannon, 20 connections, 8 s each, server in its own process)
