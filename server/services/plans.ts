@@ -24,7 +24,7 @@ import { Calibration, Depletant, ParticleSystem, Plan, PlanRecipe, Recipe, Salt,
 import type { StoredPlanOutcome } from '../models/plan';
 import { requireProgramme } from './lookups';
 import { buildMapPoints } from './map-points';
-import { programmeParameters } from './predictions';
+import { programmeParameters, recipeMaterials } from './predictions';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -97,19 +97,8 @@ async function programmeEvidence(sequelize: Sequelize, programmeId: number, spac
   return [...latest.values()];
 }
 
-/** The library rows a plan uses, or a 400 naming the field that points nowhere. */
-async function planMaterials(input: PlanRequest, transaction: Transaction | null) {
-  const particle = await ParticleSystem.findByPk(input.particleId, { transaction });
-  if (!particle) throw badRequest('particleId: no such particle system', 'particleId');
-  const solvent = await Solvent.findByPk(input.solventId, { transaction });
-  if (!solvent) throw badRequest('solventId: no such solvent', 'solventId');
-  const a = input.attraction;
-  const depletant = a.source === 'depletion' ? await Depletant.findByPk(a.depletantId, { transaction }) : null;
-  if (a.source === 'depletion' && !depletant) throw badRequest('attraction.depletantId: no such depletant', 'attraction.depletantId');
-  const salt = a.source === 'salt' ? await Salt.findByPk(a.saltId, { transaction }) : null;
-  if (a.source === 'salt' && !salt) throw badRequest('attraction.saltId: no such salt', 'attraction.saltId');
-  return { particle, solvent, depletant, salt };
-}
+/** The library rows a plan uses (the same lookup as a recipe's), or a 400 naming the field. */
+const planMaterials = (input: PlanRequest, transaction: Transaction | null) => recipeMaterials(input, transaction);
 
 const price = (override: number | null | undefined, library: number | null): PlanPrice =>
   override !== undefined && override !== null ? { pricePerKg: override, source: 'plan' } : library !== null ? { pricePerKg: library, source: 'library' } : { pricePerKg: null, source: 'none' };

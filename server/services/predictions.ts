@@ -8,16 +8,26 @@ import type { RecipeDerived } from '../../shared/views/team-data';
 import { badRequest } from '../errors';
 import { Calibration, Depletant, ParticleSystem, Programme, Salt, Solvent } from '../models';
 
-/** The library rows of a recipe, or a 400 naming the field that points nowhere. */
-export async function recipeMaterials(input: RecipeInput, transaction: Transaction | null): Promise<RecipeMaterials> {
+/** What a recipe (or a plan) names from the library. */
+export interface MaterialChoice {
+  particleId: number;
+  solventId: number;
+  attraction: { source: string; depletantId?: number; saltId?: number };
+}
+
+/** The library rows a recipe or a plan uses, or a 400 naming the field that points nowhere. */
+export async function recipeMaterials(
+  input: MaterialChoice,
+  transaction: Transaction | null,
+): Promise<RecipeMaterials & { particle: ParticleSystem; solvent: Solvent; depletant: Depletant | null; salt: Salt | null }> {
   const particle = await ParticleSystem.findByPk(input.particleId, { transaction });
   if (!particle) throw badRequest('particleId: no such particle system', 'particleId');
   const solvent = await Solvent.findByPk(input.solventId, { transaction });
   if (!solvent) throw badRequest('solventId: no such solvent', 'solventId');
   const a = input.attraction;
-  const depletant = a.source === 'depletion' ? await Depletant.findByPk(a.depletantId, { transaction }) : null;
+  const depletant = a.source === 'depletion' ? await Depletant.findByPk(a.depletantId!, { transaction }) : null;
   if (a.source === 'depletion' && !depletant) throw badRequest('attraction.depletantId: no such depletant', 'attraction.depletantId');
-  const salt = a.source === 'salt' ? await Salt.findByPk(a.saltId, { transaction }) : null;
+  const salt = a.source === 'salt' ? await Salt.findByPk(a.saltId!, { transaction }) : null;
   if (a.source === 'salt' && !salt) throw badRequest('attraction.saltId: no such salt', 'attraction.saltId');
   return { particle, solvent, depletant, salt };
 }

@@ -6,10 +6,9 @@ import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapScales } from '../geometry/scales';
 import { axisTop } from '../hooks/use-map-drawing';
-import { StateMap } from './state-map';
+import { StaticStateMap } from './state-map';
 
 const LAYERS = new Set<Layer>(DEFAULT_LAYERS);
-const NONE = new Set<string>();
 
 /** A numbered composition on the planner's map, at [φ, y in the map's own unit]. */
 export interface PlanMapMark {
@@ -77,17 +76,11 @@ export function PlanMap({ model, parameters, polydispersity, searched, feasible,
     </g>
   );
   return (
-    <StateMap
+    <StaticStateMap
       drawing={drawing}
       points={[]}
       layers={LAYERS}
-      zoom={null}
-      onZoomChange={() => {}}
-      selected={NONE}
-      onSelect={() => {}}
-      onOpen={() => {}}
       height={height}
-      interactive={false}
       decorations={decorations}
       ariaLabel={`State map of ${title}: ${drawing.modelLabel}; ${candidates.length} candidates, ${experiments.length} next experiments, the feasible window ${feasible.length > 0 ? 'shaded' : 'empty'}`}
     />

@@ -7,10 +7,9 @@ import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { axisTop } from '../hooks/use-map-drawing';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
-import { StateMap } from './state-map';
+import { StaticStateMap } from './state-map';
 
 const LAYERS = new Set<Layer>(DEFAULT_LAYERS.filter((l) => l !== 'labels'));
-const NONE = new Set<string>();
 
 /**
  * A recipe's own small map: the map it is predicted on, the recipe as an outlined shape and,
@@ -36,17 +35,11 @@ export function RecipeMiniMap({ map: predictionMap, derived, code, observations 
   const highest = drawing.yDomain[1];
   return (
     <div>
-      <StateMap
+      <StaticStateMap
         drawing={drawing}
         points={points}
         layers={LAYERS}
-        zoom={null}
-        onZoomChange={() => {}}
-        selected={NONE}
-        onSelect={() => {}}
-        onOpen={() => {}}
         height={height}
-        interactive={false}
         ariaLabel={`State map of recipe ${code}: ${drawing.modelLabel}; predicted ${derived.predictedState ?? 'unknown'}`}
       />
       {y !== null && y > highest && <p className="mt-1 text-xs text-ink-soft">The recipe's attraction is stronger than the top of this map; it is not drawn.</p>}

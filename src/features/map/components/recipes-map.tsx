@@ -6,10 +6,9 @@ import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
 import { axisTop } from '../hooks/use-map-drawing';
-import { StateMap } from './state-map';
+import { StaticStateMap } from './state-map';
 
 const LAYERS = new Set<Layer>(DEFAULT_LAYERS);
-const NONE = new Set<string>();
 
 /** The map a group of recipes shares: the free-volume map at their median q, else the generic B2* map. */
 function sharedModel(recipes: { derived: RecipeDerived }[]): MapModel {
@@ -42,17 +41,11 @@ export function RecipesMap({ recipes, height = 420, title }: { recipes: { code: 
   }, [recipes]);
   if (!built) return null;
   return (
-    <StateMap
+    <StaticStateMap
       drawing={built.drawing}
       points={built.points}
       layers={LAYERS}
-      zoom={null}
-      onZoomChange={() => {}}
-      selected={NONE}
-      onSelect={() => {}}
-      onOpen={() => {}}
       height={height}
-      interactive={false}
       ariaLabel={`State map of ${title}: ${built.drawing.modelLabel}; ${built.points.length} recipes`}
     />
   );

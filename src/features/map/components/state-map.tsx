@@ -238,3 +238,11 @@ export function StateMap({ drawing, points, layers, zoom, onZoomChange, selected
     </div>
   );
 }
+
+const NO_SELECTION = new Set<string>();
+const ignore = () => {};
+
+/** A map to look at, not to work with: no zoom, pan, brush or click (small maps, print). */
+export function StaticStateMap(props: Pick<StateMapProps, 'drawing' | 'points' | 'layers' | 'height' | 'ariaLabel' | 'decorations'>) {
+  return <StateMap {...props} zoom={null} onZoomChange={ignore} selected={NO_SELECTION} onSelect={ignore} onOpen={ignore} interactive={false} />;
+}
