@@ -74,9 +74,15 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
   }, [data]);
   const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
   const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');
+  // Every change is applied to the latest URL, not to this render's view: two quick changes in
+  // a row (axis, then theory) must both survive.
   const setView = useCallback(
-    (next: MapView) => setParams((previous) => writeMapView(previous, next), { replace: true }),
-    [setParams],
+    (change: Partial<MapView> | ((current: MapView) => Partial<MapView>)) =>
+      setParams((previous) => {
+        const current = parseMapView(previous, depletion ? 'polymerReservoir' : 'b2');
+        return writeMapView(previous, { ...current, ...(typeof change === 'function' ? change(current) : change) });
+      }, { replace: true }),
+    [setParams, depletion],
   );
   const strongest = useMemo(() => {
     const b2 = data.recipes.columns.indexOf('reducedB2');
@@ -132,18 +138,19 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
   const observations = placed.points.length - recipes;
   const mismatches = placed.points.filter((p) => p.agrees === false).length;
   const offMap = placed.points.filter((p) => p.y > drawing.yDomain[1] || p.y < drawing.yDomain[0]).length;
-  const toggle = (layer: Layer) => {
-    const layers = new Set(view.layers);
-    if (layers.has(layer)) layers.delete(layer);
-    else layers.add(layer);
-    setView({ ...view, layers });
-  };
+  const toggle = (layer: Layer) =>
+    setView((current) => {
+      const layers = new Set(current.layers);
+      if (layers.has(layer)) layers.delete(layer);
+      else layers.add(layer);
+      return { layers };
+    });
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="flex flex-wrap items-end gap-3">
           <MapControls view={view} onChange={setView} depletion={depletion} />
-          {calibration && <CalibrationSwitch calibration={calibration} calibrated={view.calibrated} onChange={(calibrated) => setView({ ...view, calibrated })} />}
+          {calibration && <CalibrationSwitch calibration={calibration} calibrated={view.calibrated} onChange={(calibrated) => setView({ calibrated })} />}
         </div>
         <MapExports svg={svgElement} canvas={canvasRef.current} points={visible} yLabel={drawing.yLabel.split(' — ')[0]} displayY={drawing.displayY} fileStem={`gelwright-${programme.codePrefix.toLowerCase()}-map`} />
       </div>

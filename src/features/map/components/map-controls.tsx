@@ -10,14 +10,15 @@ const AXIS_LABELS: Record<AxisChoice, string> = {
 };
 
 /** The choices that decide what the map shows; the view lives in the URL. */
-export function MapControls({ view, onChange, depletion }: { view: MapView; onChange: (next: MapView) => void; depletion: boolean }) {
+/** `onChange` receives only what changed; the route applies it to the latest view in the URL. */
+export function MapControls({ view, onChange, depletion }: { view: MapView; onChange: (change: Partial<MapView>) => void; depletion: boolean }) {
   const axes: AxisChoice[] = depletion ? ['polymerReservoir', 'b2', 'inverseTau', 'squareWellDepth'] : ['b2', 'inverseTau', 'squareWellDepth'];
   const generic = view.axis !== 'polymerReservoir' || !depletion;
   return (
     <div className="flex flex-wrap items-end gap-3">
       <Field label="Attraction axis" className="w-64">
         {(p) => (
-          <SelectInput {...p} value={view.axis} onChange={(e) => onChange({ ...view, axis: e.target.value as AxisChoice, zoom: null })}>
+          <SelectInput {...p} value={view.axis} onChange={(e) => onChange({ axis: e.target.value as AxisChoice, zoom: null })}>
             {axes.map((a) => (
               <option key={a} value={a}>
                 {AXIS_LABELS[a]}
@@ -29,7 +30,7 @@ export function MapControls({ view, onChange, depletion }: { view: MapView; onCh
       {generic && (
         <Field label="Fluid–fluid theory" className="w-56">
           {(p) => (
-            <SelectInput {...p} value={view.theory} onChange={(e) => onChange({ ...view, theory: e.target.value as MapView['theory'] })}>
+            <SelectInput {...p} value={view.theory} onChange={(e) => onChange({ theory: e.target.value as MapView['theory'] })}>
               <option value="meanField">Mean field (CS + B2*)</option>
               <option value="baxterPY">Sticky spheres (Percus–Yevick)</option>
             </SelectInput>
@@ -48,17 +49,17 @@ export function MapControls({ view, onChange, depletion }: { view: MapView; onCh
               defaultValue={view.lambda}
               onBlur={(e) => {
                 const lambda = Number(e.target.value);
-                if (Number.isFinite(lambda) && lambda >= 1.01 && lambda <= 3) onChange({ ...view, lambda, zoom: null });
+                if (Number.isFinite(lambda) && lambda >= 1.01 && lambda <= 3) onChange({ lambda, zoom: null });
               }}
             />
           )}
         </Field>
       )}
       <Field label="Observed from day" className="w-32">
-        {(p) => <TextInput {...p} type="number" min={0} defaultValue={view.minAge ?? ''} onBlur={(e) => onChange({ ...view, minAge: e.target.value === '' ? null : Math.max(0, Number(e.target.value)) })} />}
+        {(p) => <TextInput {...p} type="number" min={0} defaultValue={view.minAge ?? ''} onBlur={(e) => onChange({ minAge: e.target.value === '' ? null : Math.max(0, Number(e.target.value)) })} />}
       </Field>
       <Field label="to day" className="w-28">
-        {(p) => <TextInput {...p} type="number" min={0} defaultValue={view.maxAge ?? ''} onBlur={(e) => onChange({ ...view, maxAge: e.target.value === '' ? null : Math.max(0, Number(e.target.value)) })} />}
+        {(p) => <TextInput {...p} type="number" min={0} defaultValue={view.maxAge ?? ''} onBlur={(e) => onChange({ maxAge: e.target.value === '' ? null : Math.max(0, Number(e.target.value)) })} />}
       </Field>
     </div>
   );
