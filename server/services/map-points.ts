@@ -45,14 +45,17 @@ export async function buildMapPoints(sequelize: Sequelize, programmeId: number):
 
 /**
  * What changed last in a programme: the newest id and update time of its recipes and
- * observations (four index lookups). Rows are never deleted, so any insert or update moves it.
+ * observations, and the last change of its calibrations (accepting or withdrawing one
+ * re-predicts the recipes without touching their update time). Rows are never deleted, so any
+ * insert or update moves it.
  * Null when the programme does not exist.
  */
 async function programmeVersion(sequelize: Sequelize, programmeId: number): Promise<string | null> {
   const [row] = await sequelize.query<Record<string, unknown>>(
     `SELECT (SELECT COUNT(*) FROM programmes WHERE id = :p) AS pe,
             (SELECT MAX(id) FROM recipes WHERE programme_id = :p) AS ri, (SELECT MAX(updated_at) FROM recipes WHERE programme_id = :p) AS ru,
-            (SELECT MAX(id) FROM observations WHERE programme_id = :p) AS oi, (SELECT MAX(updated_at) FROM observations WHERE programme_id = :p) AS ou`,
+            (SELECT MAX(id) FROM observations WHERE programme_id = :p) AS oi, (SELECT MAX(updated_at) FROM observations WHERE programme_id = :p) AS ou,
+            (SELECT MAX(updated_at) FROM calibrations WHERE programme_id = :p) AS cu`,
     { replacements: { p: programmeId }, type: QueryTypes.SELECT },
   );
   return Number(row.pe) === 0 ? null : JSON.stringify(row);
@@ -64,8 +67,12 @@ export interface CachedMapPoints {
   gzip: Buffer;
 }
 
-/** Answers kept at most this long even when nothing seems to have changed (a same-millisecond update). */
-const MAX_AGE_MS = 10_000;
+/**
+ * Answers kept at most this long even when nothing seems to have changed: only an update by
+ * another process to an older row within the same millisecond as the latest change escapes the
+ * version check. Rebuilding costs the event loop some 150 ms for a large programme, so it is rare.
+ */
+const MAX_AGE_MS = 10 * 60_000;
 /**
  * For this long an answer is served without asking the database whether the programme
  * changed: any write committed through this process drops the cache at once, so only writes
