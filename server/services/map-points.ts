@@ -1,7 +1,8 @@
 import { gzipSync } from 'node:zlib';
 import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
-import { observationAgrees, type ObservedState, type PredictedState } from '../../shared/states';
+import type { ObservedState, PredictedState } from '../../shared/states';
+import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '../../shared/views/map-points';
 import type { MapPoints, RecipeDerived } from '../../shared/views/team-data';
 import { onWriteCommitted } from '../http/write-events';
 
@@ -20,26 +21,27 @@ export async function buildMapPoints(sequelize: Sequelize, programmeId: number):
     return [r.id, r.code, r.name, short(d.phi), short(d.reducedB2), short(d.stickiness ? 1 / d.stickiness : inverseTauFromB2(d.reducedB2)), short(d.contactEnergyKT), short(d.polymerReservoir), short(d.sizeRatio), d.predictedState, short(d.margin)];
   });
   const observations = await sequelize.query<{
-    id: number; recipe_id: number | null; code: string | null; adhoc_phi: number | null; adhoc_reduced_b2: number | null; adhoc_predicted_state: PredictedState | null;
-    observed_state: ObservedState; predicted_state: PredictedState | null; age_days: number;
+    id: number; recipe_id: number | null; adhoc_phi: number | null; adhoc_reduced_b2: number | null; adhoc_predicted_state: PredictedState | null;
+    observed_state: ObservedState; age_days: number;
   }>(
-    `SELECT o.id, o.recipe_id, r.code, o.adhoc_phi, o.adhoc_reduced_b2, o.adhoc_predicted_state, o.observed_state, r.predicted_state, o.age_days
+    `SELECT o.id, o.recipe_id, o.adhoc_phi, o.adhoc_reduced_b2, o.adhoc_predicted_state, o.observed_state, o.age_days
        FROM observations o LEFT JOIN recipes r ON r.id = o.recipe_id
       WHERE o.programme_id = ? AND o.archived_at IS NULL AND (r.id IS NULL OR r.archived_at IS NULL)
       ORDER BY o.id`,
     { replacements: [programmeId], type: QueryTypes.SELECT },
   );
-  // An observation of a recipe sits where its recipe sits: its coordinates are left null and the
-  // client reads them from the recipe's row. Only ad-hoc samples carry their own.
-  const observationRows = observations.map((o) => {
-    const predicted = o.recipe_id !== null ? o.predicted_state : o.adhoc_predicted_state;
-    const own = o.recipe_id === null;
-    return [o.id, o.recipe_id, own ? short(o.adhoc_phi) : null, own ? short(o.adhoc_reduced_b2) : null, own ? short(inverseTauFromB2(o.adhoc_reduced_b2)) : null, null, null, o.observed_state, predicted, observationAgrees(o.observed_state, predicted), o.age_days, o.code];
-  });
+  // An observation of a recipe sits where its recipe sits and shares its prediction: it is sent
+  // as its first four columns, and the client fills in the rest from the recipe's row. Only
+  // ad-hoc samples carry their own coordinates and prediction.
+  const observationRows = observations.map((o) =>
+    o.recipe_id !== null
+      ? [o.id, o.recipe_id, o.observed_state, o.age_days]
+      : [o.id, null, o.observed_state, o.age_days, short(o.adhoc_phi), short(o.adhoc_reduced_b2), short(inverseTauFromB2(o.adhoc_reduced_b2)), null, null, o.adhoc_predicted_state],
+  );
   return {
     programmeId,
-    recipes: { columns: ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'], rows: recipeRows },
-    observations: { columns: ['id', 'recipeId', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'observedState', 'predictedState', 'agrees', 'ageDays', 'recipeCode'], rows: observationRows },
+    recipes: { columns: MAP_RECIPE_COLUMNS, rows: recipeRows },
+    observations: { columns: MAP_OBSERVATION_COLUMNS, rows: observationRows },
   };
 }
 
@@ -80,15 +82,36 @@ const MAX_AGE_MS = 10 * 60_000;
  */
 const TRUST_MS = 250;
 const cache = new Map<number, CachedMapPoints & { version: string; at: number; checkedAt: number }>();
-onWriteCommitted(() => cache.clear());
+/** Moves on every committed write, so a build that started before the write is not kept. */
+let cacheGeneration = 0;
+onWriteCommitted(() => {
+  cacheGeneration += 1;
+  cache.clear();
+  inFlight.clear();
+});
+
+/** Work in flight per programme, so that twenty requests arriving together check and build once. */
+const inFlight = new Map<number, Promise<CachedMapPoints | null>>();
 
 /**
  * The overlay of a programme, built once per change and kept in memory as JSON and gzip, so the
  * map of a large programme costs a version check rather than 10,000 rows of work per request.
+ * Requests that arrive while a check or a build is running wait for it instead of starting their own.
  */
-export async function cachedMapPoints(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
+export function cachedMapPoints(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
   const recent = cache.get(programmeId);
-  if (recent && Date.now() - recent.checkedAt < TRUST_MS) return recent;
+  if (recent && Date.now() - recent.checkedAt < TRUST_MS) return Promise.resolve(recent);
+  const running = inFlight.get(programmeId);
+  if (running) return running;
+  const work: Promise<CachedMapPoints | null> = checkOrBuild(sequelize, programmeId).finally(() => {
+    if (inFlight.get(programmeId) === work) inFlight.delete(programmeId);
+  });
+  inFlight.set(programmeId, work);
+  return work;
+}
+
+async function checkOrBuild(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
+  const generation = cacheGeneration;
   const version = await programmeVersion(sequelize, programmeId);
   if (version === null) return null;
   const hit = cache.get(programmeId);
@@ -98,7 +121,10 @@ export async function cachedMapPoints(sequelize: Sequelize, programmeId: number)
   }
   const json = Buffer.from(JSON.stringify(await buildMapPoints(sequelize, programmeId)));
   const entry = { version, at: Date.now(), checkedAt: Date.now(), json, gzip: gzipSync(json, { level: 6 }), etag: `"${createHash('sha1').update(json).digest('base64url')}"` };
-  cache.set(programmeId, entry);
-  if (cache.size > 100) cache.delete(cache.keys().next().value!);
+  // A write committed while this was being read may not be in it: answer with it, keep it not.
+  if (generation === cacheGeneration) {
+    cache.set(programmeId, entry);
+    if (cache.size > 100) cache.delete(cache.keys().next().value!);
+  }
   return entry;
 }

@@ -23,6 +23,7 @@ import type { HandlerContext } from '../http/route';
 import { Calibration, Depletant, ParticleSystem, Plan, PlanRecipe, Recipe, Salt, Solvent, User } from '../models';
 import type { StoredPlanOutcome } from '../models/plan';
 import { requireProgramme } from './lookups';
+import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import { buildMapPoints } from './map-points';
 import { programmeParameters, recipeMaterials } from './predictions';
 
@@ -72,22 +73,22 @@ async function boundaryUncertainty(calibration: { id: number } | null, transacti
 async function programmeEvidence(sequelize: Sequelize, programmeId: number, space: CompositionSpace): Promise<EvidenceInput[]> {
   const points = await buildMapPoints(sequelize, programmeId);
   const mapQ = space.map.model.kind === 'depletion' ? space.map.model.q : null;
-  const recipes = new Map(points.recipes.rows.map((row) => [row[0] as number, row]));
+  const recipes = new Map(decodeMapRecipes(points).map((r) => [r.id, r]));
   const latest = new Map<string, EvidenceInput>();
-  for (const o of points.observations.rows) {
-    const [id, recipeId, phi, reducedB2, , , , observedState, , , ageDays, code] = o as [number, number | null, number | null, number | null, unknown, unknown, unknown, ObservedState, unknown, unknown, number, string | null];
+  for (const o of decodeMapObservations(points, [...recipes.values()])) {
+    const { id, recipeId, observedState, ageDays } = o;
     if (observedState === 'unclear') continue;
     let item: EvidenceInput | null = null;
     if (recipeId !== null) {
       const r = recipes.get(recipeId);
-      if (!r) continue;
-      const [, , , rPhi, rB2, , , polymerReservoir, sizeRatio] = r as [number, string, string, number, number | null, unknown, unknown, number | null, number | null];
+      if (!r || r.phi === null) continue;
+      const { polymerReservoir, sizeRatio, reducedB2: rB2 } = r;
       const attraction = mapQ !== null && polymerReservoir !== null && sizeRatio !== null && Math.abs(sizeRatio - mapQ) <= 1e-5 * mapQ
         ? { kind: 'depletion' as const, q: mapQ, polymerReservoir }
         : rB2 !== null ? { kind: 'b2' as const, value: rB2 } : null;
-      if (attraction) item = { id, label: code ?? `recipe ${recipeId}`, phi: rPhi, attraction, observedState, ageDays };
-    } else if (phi !== null && reducedB2 !== null) {
-      item = { id, label: `ad-hoc sample ${id}`, phi, attraction: { kind: 'b2', value: reducedB2 }, observedState, ageDays };
+      if (attraction) item = { id, label: r.code ?? `recipe ${recipeId}`, phi: r.phi, attraction, observedState, ageDays };
+    } else if (o.phi !== null && o.reducedB2 !== null) {
+      item = { id, label: `ad-hoc sample ${id}`, phi: o.phi, attraction: { kind: 'b2', value: o.reducedB2 }, observedState, ageDays };
     }
     if (!item) continue;
     const key = recipeId !== null ? `r${recipeId}` : `o${id}`;

@@ -194,9 +194,11 @@ export interface ShortlistView {
 
 /**
  * Map overlay for a programme, columnar so 10,000 points stay small. Recipes carry their
- * coordinates in every attraction description the map can show (null where not defined);
- * an observation of a recipe leaves its coordinates null (it sits where its recipe sits), and
- * only ad-hoc observations carry their own φ, B2* and 1/τ.
+ * coordinates in every attraction description the map can show (null where not defined).
+ * An observation of a recipe is sent as its first four columns only (id, recipe, observed state,
+ * age): it sits where its recipe sits and shares its prediction and code. Only an ad-hoc
+ * observation (recipeId null) carries every column. `decodeMapObservations` rebuilds the full
+ * records.
  */
 export interface MapPoints {
   programmeId: number;
@@ -205,7 +207,7 @@ export interface MapPoints {
     rows: (string | number | null)[][];
   };
   observations: {
-    columns: readonly ['id', 'recipeId', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'observedState', 'predictedState', 'agrees', 'ageDays', 'recipeCode'];
-    rows: (string | number | boolean | null)[][];
+    columns: readonly ['id', 'recipeId', 'observedState', 'ageDays', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'predictedState'];
+    rows: (string | number | null)[][];
   };
 }

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { decodeMapObservations } from '../../shared/views/map-points';
 import { buildUser, signedInAgent } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -31,9 +32,25 @@ describe('GET /api/map-points', () => {
     expect(r.phi).toBeCloseTo(kept.derived.phi, 5);
     expect(r.reducedB2 / kept.derived.reducedB2).toBeCloseTo(1, 5);
     expect(r.polymerReservoir / kept.derived.polymerReservoir).toBeCloseTo(1, 5);
-    const o = Object.fromEntries(observations.columns.map((c: string, i: number) => [c, observations.rows[0][i]]));
-    // An observation of a recipe leaves its coordinates to the recipe's row.
-    expect(o).toMatchObject({ id: obs.id, recipeId: kept.id, phi: null, reducedB2: null, observedState: 'gel', ageDays: 3, recipeCode: kept.code });
+    // An observation of a recipe is sent as id, recipe, state and age; the rest is the recipe's.
+    expect(observations.columns.slice(0, 4)).toEqual(['id', 'recipeId', 'observedState', 'ageDays']);
+    expect(observations.rows).toEqual([[obs.id, kept.id, 'gel', 3]]);
+    const [decoded] = decodeMapObservations(response.body);
+    expect(decoded).toMatchObject({ id: obs.id, recipeId: kept.id, recipeCode: kept.code, observedState: 'gel', ageDays: 3, predictedState: kept.derived.predictedState, agrees: obs.agrees });
+    expect(decoded.phi).toBe(r.phi);
+  });
+
+  it('sends an ad-hoc observation with its own coordinates and prediction', async () => {
+    const programme = await buildProgramme();
+    const scientist = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
+    const created = await scientist.post('/api/observations').send({ adhoc: { programmeId: programme.id, phi: 0.2, reducedB2: -6 }, mixedAt: '2026-11-01', ageDays: 1, observedState: 'gel', method: 'visual' });
+    expect(created.status).toBe(201);
+    const response = await scientist.get(`/api/map-points?programme=${programme.id}`);
+    const [decoded] = decodeMapObservations(response.body);
+    expect(decoded).toMatchObject({ id: created.body.observation.id, recipeId: null, recipeCode: null, phi: 0.2, reducedB2: -6, observedState: 'gel', agrees: created.body.observation.agrees });
+    // 1/τ = 4(1 − B2*) for Baxter's sticky spheres (physics.md §2): 4 × 7 = 28.
+    expect(decoded.inverseTau).toBeCloseTo(28, 6);
+    expect(decoded.predictedState).toBe(created.body.observation.predictedState);
   });
 
   it('serves the same answer compressed, and a 304 to a client that has it already', async () => {
@@ -52,6 +69,23 @@ describe('GET /api/map-points', () => {
     const changed = await formulator.get(`/api/map-points?programme=${programme.id}`).set('If-None-Match', plain.headers.etag);
     expect(changed.status).toBe(200);
     expect(changed.body.recipes.rows).toHaveLength(2);
+  });
+
+  it('answers many loads at once alike, and a write made while they run is in the next answer', async () => {
+    const lib = await buildLibrary();
+    const programme = await buildProgramme();
+    const formulator = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+    await formulator.post('/api/recipes').send(recipeInput(programme, lib));
+    const url = `/api/map-points?programme=${programme.id}`;
+    const together = await Promise.all(Array.from({ length: 12 }, () => formulator.get(url)));
+    expect(new Set(together.map((r) => r.status))).toEqual(new Set([200]));
+    expect(new Set(together.map((r) => r.headers.etag)).size).toBe(1);
+    // Loads in flight while a recipe is saved: whatever they answer, a load after the save sees it.
+    const during = Array.from({ length: 8 }, () => formulator.get(url));
+    const saved = await formulator.post('/api/recipes').send(recipeInput(programme, lib));
+    await Promise.all(during);
+    const after = await formulator.get(url);
+    expect(after.body.recipes.rows.map((r: unknown[]) => r[0])).toContain(saved.body.recipe.id);
   });
 
   it('answers an unknown programme with 400 naming the field', async () => {

@@ -1,15 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import type { MapPoints, RecipeDerived } from '@shared/views/team-data';
+import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '@shared/views/map-points';
 import { nearbyEvidence } from './nearby-evidence';
 
-const recipeColumns = ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'] as const;
-const observationColumns = ['id', 'recipeId', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'observedState', 'predictedState', 'agrees', 'ageDays', 'recipeCode'] as const;
 
 function points(): MapPoints {
   return {
     programmeId: 1,
     recipes: {
-      columns: recipeColumns,
+      columns: MAP_RECIPE_COLUMNS,
       rows: [
         [1, 'A-0001', 'self', 0.1, -5, null, null, null, null, 'gel', 0.1],
         [2, 'A-0002', 'near', 0.13, -5.8, null, null, null, null, 'gel', 0.1],
@@ -18,13 +17,13 @@ function points(): MapPoints {
       ],
     },
     observations: {
-      columns: observationColumns,
+      columns: MAP_OBSERVATION_COLUMNS,
       rows: [
-        [10, 2, 0.13, -5.8, null, null, null, 'gel', 'gel', true, 7, 'A-0002'],
-        [11, 2, 0.13, -5.8, null, null, null, 'collapsed', 'gel', false, 45, 'A-0002'],
-        [12, 2, 0.13, -5.8, null, null, null, 'gel', 'gel', true, 30, 'A-0002'],
-        [13, 3, 0.3, -5, null, null, null, 'collapsed', 'gel', false, 20, 'A-0003'],
-        [14, 1, 0.1, -5, null, null, null, 'collapsed', 'gel', false, 10, 'A-0001'],
+        [10, 2, 'gel', 7],
+        [11, 2, 'collapsed', 45],
+        [12, 2, 'gel', 30],
+        [13, 3, 'collapsed', 20],
+        [14, 1, 'collapsed', 10],
       ],
     },
   };

@@ -1,3 +1,4 @@
+import { decodeMapObservations, decodeMapRecipes } from '@shared/views/map-points';
 import type { MapPoints, RecipeDerived } from '@shared/views/team-data';
 
 export interface NearbyEvidence {
@@ -16,26 +17,19 @@ export const NEARBY = { phi: 0.06, b2: 1.5, b2Relative: 0.2 };
  * of our own, stated on screen; not a published criterion.
  */
 export function nearbyEvidence(recipeId: number, derived: RecipeDerived, data: MapPoints): NearbyEvidence {
-  const r = data.recipes.columns;
-  const o = data.observations.columns;
   const near = new Set<number>();
-  for (const row of data.recipes.rows) {
-    const id = row[r.indexOf('id')] as number;
-    const phi = row[r.indexOf('phi')] as number | null;
-    const b2 = row[r.indexOf('reducedB2')] as number | null;
+  const recipes = decodeMapRecipes(data);
+  for (const { id, phi, reducedB2: b2 } of recipes) {
     if (id === recipeId || phi === null || b2 === null || derived.reducedB2 === null) continue;
     const b2Window = Math.max(NEARBY.b2, Math.abs(derived.reducedB2) * NEARBY.b2Relative);
     if (Math.abs(phi - derived.phi) <= NEARBY.phi && Math.abs(b2 - derived.reducedB2) <= b2Window) near.add(id);
   }
   const collapsed: NearbyEvidence['collapsed'] = [];
   let heldGels = 0;
-  for (const row of data.observations.rows) {
-    const recipe = row[o.indexOf('recipeId')] as number | null;
-    if (recipe === null || !near.has(recipe)) continue;
-    const state = row[o.indexOf('observedState')];
-    const age = row[o.indexOf('ageDays')] as number;
-    if (state === 'collapsed') collapsed.push({ code: row[o.indexOf('recipeCode')] as string, ageDays: age });
-    if (state === 'gel' && age >= 30) heldGels++;
+  for (const o of decodeMapObservations(data, recipes)) {
+    if (o.recipeId === null || !near.has(o.recipeId)) continue;
+    if (o.observedState === 'collapsed') collapsed.push({ code: o.recipeCode ?? '', ageDays: o.ageDays });
+    if (o.observedState === 'gel' && o.ageDays >= 30) heldGels++;
   }
   return { recipes: near.size, collapsed: collapsed.sort((a, b) => a.ageDays - b.ageDays), heldGels };
 }
