@@ -43,7 +43,8 @@ export function observationWhere(query: ObservationListQuery): WhereOptions {
 
 async function resolveSubject(ctx: Ctx, input: ObservationInput) {
   if (input.recipeId !== undefined) {
-    const recipe = await Recipe.findByPk(input.recipeId, { transaction: ctx.transaction });
+    // Only what the record and its answer need (as observationIncludes), not the recipe's whole row.
+    const recipe = await Recipe.findByPk(input.recipeId, { attributes: ['id', 'code', 'predictedState', 'programmeId', 'archivedAt'], transaction: ctx.transaction });
     if (!recipe) throw badRequest('recipeId: no such recipe', 'recipeId');
     if (recipe.archivedAt) throw badRequest(`recipeId: recipe ${recipe.code} is archived`, 'recipeId');
     return { recipe, fields: { programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null } };
