@@ -7,10 +7,16 @@ export interface LoadFigure {
   p99: number;
   errors: number;
   non2xx: number;
+  /** CPU the app process spent per answered request, in ms (null when it could not be read). */
+  appCpuMsPerRequest: number | null;
 }
 
 /** One autocannon run on loopback: `connections` clients for `seconds`, as fast as the server answers. */
-export async function load(name: string, options: { url: string; method?: 'GET' | 'POST'; body?: string; cookie: string; connections?: number; seconds?: number }): Promise<LoadFigure> {
+export async function load(
+  name: string,
+  options: { url: string; method?: 'GET' | 'POST'; body?: string; cookie: string; connections?: number; seconds?: number; appCpuSeconds?: () => number | null },
+): Promise<LoadFigure> {
+  const cpuBefore = options.appCpuSeconds?.() ?? null;
   const result = await autocannon({
     url: options.url,
     method: options.method ?? 'GET',
@@ -20,5 +26,8 @@ export async function load(name: string, options: { url: string; method?: 'GET' 
     connections: options.connections ?? 20,
     duration: options.seconds ?? 8,
   });
-  return { name, requestsPerSecond: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors: result.errors, non2xx: result.non2xx };
+  const cpuAfter = options.appCpuSeconds?.() ?? null;
+  const answered = result.requests.total;
+  const appCpuMsPerRequest = cpuBefore !== null && cpuAfter !== null && answered > 0 ? ((cpuAfter - cpuBefore) * 1000) / answered : null;
+  return { name, requestsPerSecond: result.requests.average, p50: result.latency.p50, p99: result.latency.p99, errors: result.errors, non2xx: result.non2xx, appCpuMsPerRequest };
 }

@@ -20,6 +20,7 @@ import { BENCH_PASSWORD, seedLargeProgramme } from './seed-large';
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const ms = (v: number) => `${v.toFixed(1)} ms`;
 const met = (ok: boolean) => (ok ? 'yes' : '**no**');
+const cpuPerRequest = (f: LoadFigure) => (f.appCpuMsPerRequest === null ? 'n/a' : `${f.appCpuMsPerRequest.toFixed(2)} ms`);
 
 function freePort(): Promise<number> {
   return new Promise((resolve) => {
@@ -40,7 +41,7 @@ function runScript(path: string): string {
   return text;
 }
 
-async function apiAndMap() {
+async function apiAndMap(options: { pan: boolean } = { pan: true }) {
   const dbPort = await freePort();
   const appPort = await freePort();
   const instance = mariaInstance(root, `mariadb-bench-${process.pid}`, dbPort);
@@ -64,10 +65,12 @@ async function apiAndMap() {
     const scientist = await new Client(app.url).signIn(seeded.scientistEmail, BENCH_PASSWORD);
     const cookieOf = (c: Client) => (c as unknown as { cookie: string }).cookie;
     const figures: LoadFigure[] = [];
-    figures.push(await load('GET /api/health', { url: `${app.url}/api/health`, cookie: cookieOf(viewer) }));
-    figures.push(await load('GET /api/map-points (10,000 observations)', { url: `${app.url}/api/map-points?programme=${seeded.programmeId}`, cookie: cookieOf(viewer) }));
-    figures.push(await load('POST /api/observations', { url: `${app.url}/api/observations`, method: 'POST', cookie: cookieOf(scientist), body: JSON.stringify({ recipeId: seeded.recipeId, mixedAt: '2026-11-30', ageDays: 1, observedState: 'gel', method: 'visual' }) }));
-    for (const f of figures) console.log(`${f.name.padEnd(44)} ${f.requestsPerSecond.toFixed(0).padStart(6)} req/s   p50 ${f.p50} ms   p99 ${f.p99} ms   errors ${f.errors + f.non2xx}`);
+    const appCpuSeconds = () => app.cpuSeconds();
+    figures.push(await load('GET /api/health', { url: `${app.url}/api/health`, cookie: cookieOf(viewer), appCpuSeconds }));
+    figures.push(await load('GET /api/map-points (10,000 observations)', { url: `${app.url}/api/map-points?programme=${seeded.programmeId}`, cookie: cookieOf(viewer), appCpuSeconds }));
+    figures.push(await load('POST /api/observations', { url: `${app.url}/api/observations`, method: 'POST', cookie: cookieOf(scientist), appCpuSeconds, body: JSON.stringify({ recipeId: seeded.recipeId, mixedAt: '2026-11-30', ageDays: 1, observedState: 'gel', method: 'visual' }) }));
+    for (const f of figures) console.log(`${f.name.padEnd(44)} ${f.requestsPerSecond.toFixed(0).padStart(6)} req/s   p50 ${f.p50} ms   p99 ${f.p99} ms   errors ${f.errors + f.non2xx}   app CPU ${cpuPerRequest(f)} per request`);
+    if (!options.pan) return { figures, pan: null };
     console.log('bench: panning the map in Chromium …');
     const pan = await measureMapPan(app.url, seeded.programmeId, seeded.viewerEmail);
     console.log(`map pan with 10,000 points: redraw median ${ms(pan.redrawMedian)}, p90 ${ms(pan.redrawP90)} over ${pan.redraws} redraws; canvas paint alone ${ms(pan.paintMedian)}; harness step (protocol + two frames) ${ms(pan.stepMedian)}`);
@@ -80,6 +83,11 @@ async function apiAndMap() {
 }
 
 async function main() {
+  if (process.argv.includes('--api')) {
+    // Only the API figures, printed and not written down: for trying a change to the server.
+    await apiAndMap({ pan: false });
+    return;
+  }
   const when = new Date().toISOString();
   const machine = `${cpus().length} × ${cpus()[0]?.model ?? 'unknown CPU'}, ${(totalmem() / 2 ** 30).toFixed(0)} GiB, Node.js ${process.version}, ${process.platform}`;
   console.log(`Gelwright benchmarks — ${when}\n${machine}\n`);
@@ -93,8 +101,9 @@ async function main() {
   console.log(`initial JavaScript: ${(bundle.gzipTotal / 1024).toFixed(1)} KB gzipped (${(bundle.rawTotal / 1024).toFixed(0)} KB raw) in ${bundle.files.length} files; target under 250 KB`);
   console.log('\n— API and map —');
   const { figures, pan } = await apiAndMap();
+  if (!pan) throw new Error('the map pan was not measured');
   const health = figures[0].requestsPerSecond;
-  const rows = figures.map((f) => `| ${f.name} | ${f.requestsPerSecond.toFixed(0)} | ${(f.requestsPerSecond / health).toFixed(2)} | ${f.p50} | ${f.p99} | ${f.errors + f.non2xx} |`);
+  const rows = figures.map((f) => `| ${f.name} | ${f.requestsPerSecond.toFixed(0)} | ${(f.requestsPerSecond / health).toFixed(2)} | ${f.p50} | ${f.p99} | ${cpuPerRequest(f)} | ${f.errors + f.non2xx} |`);
   const doc = `# Gelwright performance
 
 Measured by \`npm run bench\` on ${when.slice(0, 10)} (${when}).
@@ -112,13 +121,14 @@ Machine: ${machine}. The machine is shared: figures vary from run to run; each r
 | planning 10,000 candidate compositions | under 200 ms | see below (each line says) | see below |
 
 The load generator (autocannon), MariaDB and the app share the same two cores here, so the API
-figures measure that whole arrangement, not the app alone; \`docs/scaling.md\` says how the
-layout grows when a target is missed.
+figures measure that whole arrangement, not the app alone. "App CPU per request" is the app
+process's own CPU time (from /proc) over the requests it answered: the figure to size more
+processes with; \`docs/scaling.md\` says how the layout grows.
 
 ## API on loopback (autocannon, 20 connections, 8 s each, server in its own process)
 
-| route | requests/s | ratio to /api/health | p50 ms | p99 ms | errors |
-|---|---|---|---|---|---|
+| route | requests/s | ratio to /api/health | p50 ms | p99 ms | app CPU per request | errors |
+|---|---|---|---|---|---|---|
 ${rows.join('\n')}
 
 ## Physics (\`scripts/bench/physics.ts\`)

@@ -1,5 +1,9 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
+
+/** USER_HZ: the unit of /proc/<pid>/stat times; 100 on every Linux build in common use. */
+const CLOCK_TICKS_PER_SECOND = 100;
 
 /** Runs the real server (server/index.ts under node with tsx's loader) as a separate process, so a test can kill -9 it. */
 export class AppProcess {
@@ -15,7 +19,7 @@ export class AppProcess {
     const stale = await fetch(`${this.url}/api/health`, { signal: AbortSignal.timeout(500) }).catch(() => null);
     if (stale) throw new Error(`${this.url} already answers: an earlier app process is still running`);
     // One process, node with tsx's loader (not the tsx wrapper, whose child would survive a SIGKILL).
-    this.child = spawn(process.execPath, ['--import', 'tsx', join(this.root, 'server', 'index.ts')], {
+    this.child = spawn(process.execPath, [...(process.env.GELWRIGHT_NODE_FLAGS ?? '').split(' ').filter(Boolean), '--import', 'tsx', join(this.root, 'server', 'index.ts')], {
       cwd: this.root,
       env: { ...process.env, ...this.env },
       stdio: ['ignore', 'ignore', 'pipe'],
@@ -34,6 +38,22 @@ export class AppProcess {
       await new Promise((r) => setTimeout(r, 150));
     }
     throw new Error(`the app did not answer within ${timeoutMs / 1000} s:\n${stderr}`);
+  }
+
+  /**
+   * CPU time the app process has used so far, in seconds (user + system, from /proc on Linux;
+   * null elsewhere or when it is not running): the benchmark divides it by the requests served.
+   */
+  cpuSeconds(): number | null {
+    const pid = this.child?.pid;
+    if (pid === undefined || process.platform !== 'linux') return null;
+    try {
+      // Fields after the command name (which may hold spaces, hence the last ')'): utime and stime are the 12th and 13th.
+      const fields = readFileSync(`/proc/${pid}/stat`, 'utf8').split(')').pop()!.trim().split(' ');
+      return (Number(fields[11]) + Number(fields[12])) / CLOCK_TICKS_PER_SECOND;
+    } catch {
+      return null;
+    }
   }
 
   kill9() {
