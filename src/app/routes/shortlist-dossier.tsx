@@ -5,6 +5,7 @@ import { Button } from '@/components/ui/button';
 import { StateBadge } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { formatDate, formatDateTime, formatNumber } from '@/lib/format';
+import { SymbolText } from '@/components/ui/symbol-text';
 import { SafetyNote } from '@/features/cautions/safety-note';
 import { RecipesMap } from '@/features/map/components/recipes-map';
 import { useProgramme } from '@/features/programmes';
@@ -127,12 +128,12 @@ function DossierRecipe({ item }: { item: ShortlistItemView }) {
           ['τ', d.stickiness],
           ['U/kT', d.contactEnergyKT],
           ['q', d.sizeRatio],
-          ['φp^R', d.polymerReservoir],
+          ['φ_p^R', d.polymerReservoir],
           ['Pe_g', d.timescales.gravitationalPeclet],
           ['Settling (m/s)', d.timescales.settlingSpeedMs],
         ].map(([label, value]) => (
           <div key={label as string} className="flex justify-between gap-2 border-b border-line/50">
-            <dt className="text-ink-soft">{label}</dt>
+            <dt className="text-ink-soft"><SymbolText text={label as string} /></dt>
             <dd className="tabular-nums">{formatNumber(value as number | null, 3)}</dd>
           </div>
         ))}

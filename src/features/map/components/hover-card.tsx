@@ -1,6 +1,7 @@
 import { STATE_LABELS } from '@shared/states';
 import { StateGlyph } from '@/components/ui/state-badge';
 import { formatNumber } from '@/lib/format';
+import { SymbolText } from '@/components/ui/symbol-text';
 import type { MapPoint } from '../geometry/types';
 
 /** The card shown next to the point under the pointer. */
@@ -13,7 +14,7 @@ export function HoverCard({ point, x, y, width, yLabel, displayY }: { point: Map
       </p>
       {point.name && <p className="mb-1 text-ink-soft">{point.name}</p>}
       <p>
-        φ {formatNumber(point.x, 3)} · {yLabel} {formatNumber(displayY(point.y), 3)}
+        φ {formatNumber(point.x, 3)} · <SymbolText text={yLabel} /> {formatNumber(displayY(point.y), 3)}
       </p>
       {point.predicted && <p>Predicted: {STATE_LABELS[point.predicted]}</p>}
       {point.kind === 'observation' && (

@@ -3,7 +3,7 @@ import { SelectInput, TextInput } from '@/components/ui/inputs';
 import type { AxisChoice, MapView } from '../geometry/map-view';
 
 const AXIS_LABELS: Record<AxisChoice, string> = {
-  polymerReservoir: 'Polymer φp^R (free-volume theory)',
+  polymerReservoir: 'Polymer in reservoir (free volume)',
   b2: 'Reduced B2*',
   inverseTau: 'Baxter 1/τ',
   squareWellDepth: 'Square-well U/kT at range λ',

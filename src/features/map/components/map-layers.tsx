@@ -2,6 +2,8 @@ import { line } from 'd3-shape';
 import { STATE_LABELS } from '@shared/states';
 import { STATE_STYLE } from '@/lib/state-style';
 import { formatNumber } from '@/lib/format';
+import { SvgSymbolText } from '@/components/ui/symbol-text';
+import { fittingLabel } from '../geometry/axis-label';
 import type { StateRegion } from '../geometry/regions';
 import type { MapScales } from '../geometry/scales';
 import type { Layer } from '../geometry/map-view';
@@ -40,13 +42,39 @@ interface Box {
 /** A marker's name without its parenthesised numbers (those stay in its tooltip). */
 const shortLabel = (label: string) => label.split(' (')[0];
 
-/** The space the marker labels take, kept free of line labels. */
-function markerBoxes(drawing: MapDrawing, scales: MapScales): Box[] {
-  return drawing.markers.map((m) => {
-    const x = scales.x(m.x);
-    const y = scales.y(m.y);
-    return { x0: x - 6, y0: y - 18, x1: x + 10 + shortLabel(m.label).length * 6, y1: y + 6 };
-  });
+/**
+ * Where a marker's label goes: to the right of the marker, or to its left when it would run off
+ * the plot. About 6 px per character at 11 px.
+ */
+function markerLabelSpot(m: { x: number; y: number; label: string }, scales: MapScales): { dx: number; anchor: 'start' | 'end'; box: Box } {
+  const x = scales.x(m.x);
+  const y = scales.y(m.y);
+  const width = shortLabel(m.label).length * 6;
+  const right = x + 7 + width <= scales.inner.width - 2;
+  return right
+    ? { dx: 7, anchor: 'start', box: { x0: x - 6, y0: y - 18, x1: x + 10 + width, y1: y + 6 } }
+    : { dx: -7, anchor: 'end', box: { x0: x - 10 - width, y0: y - 18, x1: x + 6, y1: y + 6 } };
+}
+
+/** A region's name is drawn where it fits; null when its spot is too near the edge. */
+function regionLabelSpot(region: StateRegion, scales: MapScales): { x: number; y: number; box: Box } | null {
+  if (!region.labelAt) return null;
+  const x = scales.x(region.labelAt[0]);
+  const y = scales.y(region.labelAt[1]);
+  if (x < 20 || y < 14 || x > scales.inner.width - 20 || y > scales.inner.height - 6) return null;
+  // About 7.5 px per character at 13 px semibold, centred on the spot.
+  const half = (REGION_LABEL(region.state).length * 7.5) / 2;
+  return { x, y, box: { x0: x - half, y0: y - 13, x1: x + half, y1: y + 3 } };
+}
+
+/** The space the marker and region labels take, kept free of line labels. */
+function reservedBoxes(drawing: MapDrawing, regions: StateRegion[], scales: MapScales, layers: Set<Layer>): Box[] {
+  const boxes = drawing.markers.map((m) => markerLabelSpot(m, scales).box);
+  if (layers.has('regions')) for (const region of regions) {
+    const spot = regionLabelSpot(region, scales);
+    if (spot) boxes.push(spot.box);
+  }
+  return boxes;
 }
 
 const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
@@ -111,31 +139,32 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
             />
           ))}
         {layers.has('lines') &&
-          drawing.markers.map((m) => (
-            <g key={m.id} transform={`translate(${scales.x(m.x)},${scales.y(m.y)})`} data-marker={m.id}>
-              {m.reference ? <path d="M-5,-5L5,5M-5,5L5,-5" stroke="#1c2630" strokeWidth={1.6} /> : <circle r={4.5} fill="#1c2630" stroke="#ffffff" strokeWidth={1.5} />}
-              <title>{m.label}</title>
-              {layers.has('labels') && (
-                <text x={7} y={-6} fontSize={11} fill="#1c2630" paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
-                  {shortLabel(m.label)}
-                </text>
-              )}
-            </g>
-          ))}
+          drawing.markers.map((m) => {
+            const spot = markerLabelSpot(m, scales);
+            return (
+              <g key={m.id} transform={`translate(${scales.x(m.x)},${scales.y(m.y)})`} data-marker={m.id}>
+                {m.reference ? <path d="M-5,-5L5,5M-5,5L5,-5" stroke="#1c2630" strokeWidth={1.6} /> : <circle r={4.5} fill="#1c2630" stroke="#ffffff" strokeWidth={1.5} />}
+                <title>{m.label}</title>
+                {layers.has('labels') && (
+                  <text x={spot.dx} y={-6} textAnchor={spot.anchor} fontSize={11} fill="#1c2630" paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+                    {shortLabel(m.label)}
+                  </text>
+                )}
+              </g>
+            );
+          })}
         {layers.has('labels') && layers.has('regions') &&
           regions.map((region) => {
-            if (!region.labelAt) return null;
-            const x = scales.x(region.labelAt[0]);
-            const y = scales.y(region.labelAt[1]);
-            if (x < 20 || y < 14 || x > scales.inner.width - 20 || y > scales.inner.height - 6) return null;
+            const spot = regionLabelSpot(region, scales);
+            if (!spot) return null;
             return (
-              <text key={region.state} x={x} y={y} textAnchor="middle" fontSize={13} fontWeight={600} fill={REGION_INK(region.state)} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
+              <text key={region.state} x={spot.x} y={spot.y} textAnchor="middle" fontSize={13} fontWeight={600} fill={REGION_INK(region.state)} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
                 {REGION_LABEL(region.state)}
               </text>
             );
           })}
         {layers.has('labels') && layers.has('lines') &&
-          [...placeLineLabels(drawing.lines, scales, markerBoxes(drawing, scales)).entries()].map(([id, spot]) => {
+          [...placeLineLabels(drawing.lines, scales, reservedBoxes(drawing, regions, scales, layers)).entries()].map(([id, spot]) => {
             const l = drawing.lines.find((line) => line.id === id)!;
             return (
               <text key={id} x={spot.x} y={spot.y} textAnchor={spot.anchor} fontSize={10.5} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
@@ -163,7 +192,7 @@ export function MapAxes({ scales, xLabel, yLabel, displayY }: { scales: MapScale
           </g>
         ))}
         <text x={scales.inner.width / 2} y={36} textAnchor="middle" fontSize={12} fill="#1c2630" fontWeight={500}>
-          {xLabel}
+          <SvgSymbolText text={xLabel} />
         </text>
       </g>
       {yTicks.map((t) => (
@@ -175,7 +204,7 @@ export function MapAxes({ scales, xLabel, yLabel, displayY }: { scales: MapScale
         </g>
       ))}
       <text transform={`translate(${-46},${scales.inner.height / 2}) rotate(-90)`} textAnchor="middle" fontSize={12} fill="#1c2630" fontWeight={500}>
-        {yLabel}
+        <SvgSymbolText text={fittingLabel(yLabel, scales.inner.height)} />
       </text>
     </g>
   );

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { STATE_LABELS } from '@shared/states';
 import { formatNumber } from '@/lib/format';
+import { SymbolText } from '@/components/ui/symbol-text';
 import type { MapPoint } from '../geometry/types';
 
 const LIMIT = 500;
@@ -25,7 +26,7 @@ export function PointsTable({ points, yLabel, displayY }: { points: MapPoint[]; 
               <th scope="col" className="py-1 pr-3">Code</th>
               <th scope="col" className="py-1 pr-3">Kind</th>
               <th scope="col" className="py-1 pr-3 text-right">φ</th>
-              <th scope="col" className="py-1 pr-3 text-right">{yLabel}</th>
+              <th scope="col" className="py-1 pr-3 text-right"><SymbolText text={yLabel} /></th>
               <th scope="col" className="py-1 pr-3">State</th>
               <th scope="col" className="py-1 pr-3">Predicted</th>
               <th scope="col" className="py-1">Day</th>

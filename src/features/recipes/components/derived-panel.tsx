@@ -1,6 +1,7 @@
 import type { RecipeDerived } from '@shared/views/team-data';
 import { StateBadge } from '@/components/ui/state-badge';
 import { formatNumber } from '@/lib/format';
+import { SymbolText } from '@/components/ui/symbol-text';
 
 interface Row {
   label: string;
@@ -14,8 +15,8 @@ function rows(d: RecipeDerived): Row[] {
   return [
     { label: 'Volume fraction φ', value: d.phi, hint: 'Share of the sample volume taken by particles.' },
     { label: 'Size ratio q', value: d.sizeRatio, hint: 'Polymer radius of gyration over particle radius.' },
-    { label: 'Polymer in reservoir φp^R', value: d.polymerReservoir, hint: 'Polymer volume fraction of a reservoir in equilibrium with the sample.' },
-    { label: 'Polymer in sample φp', value: d.polymerSystem, hint: 'Polymer concentration over its overlap concentration.' },
+    { label: 'Polymer in reservoir φ_p^R', value: d.polymerReservoir, hint: 'Polymer volume fraction of a reservoir in equilibrium with the sample.' },
+    { label: 'Polymer in sample φ_p', value: d.polymerSystem, hint: 'Polymer concentration over its overlap concentration.' },
     { label: 'Overlap concentration c*', value: d.overlapConcentrationGL, unit: 'g/L', hint: 'Where polymer coils start to touch.' },
     { label: 'Contact attraction U/kT', value: d.contactEnergyKT, hint: 'Depth of the pair attraction at contact, in units of thermal energy.' },
     { label: 'Attraction range', value: d.rangeSigma, unit: 'σ', hint: 'How far the attraction reaches, as a fraction of the particle diameter.' },
@@ -59,7 +60,7 @@ export function DerivedPanel({ derived, title = 'Derived parameters' }: { derive
       <dl className="grid grid-cols-1 gap-x-6 gap-y-1.5 text-sm sm:grid-cols-2">
         {rows(derived).map((row) => (
           <div key={row.label} className="flex items-baseline justify-between gap-3 border-b border-line/60 py-1" title={row.hint}>
-            <dt className="text-ink-soft">{row.label}</dt>
+            <dt className="text-ink-soft"><SymbolText text={row.label} /></dt>
             <dd className="tabular-nums">
               {formatNumber(row.value, row.digits ?? 3)}
               {row.value !== null && row.unit ? ` ${row.unit}` : ''}
