@@ -1,37 +1,31 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { IMPORT_COLUMNS } from '../../shared/schemas/observations';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, pngBytes, recipeInput } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
 let programme: Programme;
 let scientist: TestUser;
 let scientistAgent: Awaited<ReturnType<typeof signedInAgent>>;
 const recipes: { id: number; code: string; derived: { predictedState: string | null } }[] = [];
 
+const suite = withBrowserStack();
+
 beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
   const lib = await buildLibrary();
   programme = await buildProgramme({ name: 'Bench import primers' });
-  const formulator = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+  const formulator = await signedInAgent(suite.stack.app, await buildUser({ role: 'formulator' }));
   for (const concentrationGL of [3, 9]) {
     const created = await formulator.post('/api/recipes').send(recipeInput(programme, lib, { attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL } }));
     expect(created.status).toBe(201);
     recipes.push(created.body.recipe);
   }
   scientist = await buildUser({ role: 'scientist', name: 'Sana Bench' });
-  scientistAgent = await signedInAgent(stack.app, scientist);
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
+  scientistAgent = await signedInAgent(suite.stack.app, scientist);
 });
 
 const csv = (rows: string[][]) => Buffer.from([IMPORT_COLUMNS.join(','), ...rows.map((r) => r.join(','))].join('\n') + '\n');
@@ -46,8 +40,8 @@ describe('the bench log', () => {
   it('a scientist imports a CSV with one bad row: nothing is imported and the row is shown; the fixed file imports once and its rows are in the log', async () => {
     const [first, second] = recipes;
     expect(first.derived.predictedState && second.derived.predictedState).toBeTruthy();
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, scientist.email, scientist.password);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, scientist.email, scientist.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Bench log' }).click();
     await page.getByRole('heading', { name: 'Bench log', level: 1 }).waitFor();
     // Other tests' programmes share this database: choose ours, and the URL carries the choice.
@@ -110,9 +104,9 @@ describe('the bench log', () => {
     const [first] = recipes;
     // "Collapsed gel" is never a predicted state, so it disagrees with whatever was predicted.
     expect(first.derived.predictedState).not.toBeNull();
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, scientist.email, scientist.password);
-    await page.goto(`${stack.url}/bench?programme=${programme.id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, scientist.email, scientist.password);
+    await page.goto(`${suite.stack.url}/bench?programme=${programme.id}`);
     await page.getByRole('button', { name: 'Record an outcome' }).click();
     const form = page.getByRole('form', { name: 'Record an outcome' });
     await form.getByRole('button', { name: 'Save the outcome' }).click();
@@ -159,7 +153,7 @@ describe('the bench log', () => {
     const exportHref = await page.getByRole('link', { name: 'Export these observations as CSV' }).getAttribute('href');
     expect(exportHref).toContain(`programme=${programme.id}`);
     expect(exportHref).toContain('disagreeing=true');
-    const exported = await page.request.get(`${stack.url}${exportHref}`);
+    const exported = await page.request.get(`${suite.stack.url}${exportHref}`);
     expect(exported.status()).toBe(200);
     const body = await exported.text();
     expect(body).toContain('clear layer on top');

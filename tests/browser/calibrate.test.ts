@@ -1,22 +1,20 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { gelOnset } from '../../shared/calibration';
 import { syntheticObservations } from '../../shared/calibration/test-support/synthetic-observations';
 import { squareWellDepthFromReducedB2 } from '../../shared/physics';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import { Calibration, Recipe, type Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
 // Invented bench: ad-hoc compositions "observed" with the classifier at a known attraction
 // shift of +0.8 and logistic noise (shared/calibration test support), and four square-well
 // recipes at φ = 0.2 just on the weak side of the theory's spinodal.
 
-let stack: TestStack;
-let browser: Browser;
 let programme: Programme;
 let small: Programme;
 let manager: TestUser;
@@ -31,16 +29,16 @@ async function recordBench(agent: Awaited<ReturnType<typeof signedInAgent>>, tar
   }
 }
 
+const suite = withBrowserStack();
+
 beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
   const lib = await buildLibrary();
   programme = await buildProgramme({ name: 'Tacky coating base', attractionSource: 'direct', goalState: 'gel' });
   small = await buildProgramme({ name: 'Fresh pilot line', attractionSource: 'direct', goalState: 'gel' });
   manager = await buildUser({ role: 'manager', name: 'Malin Manager' });
   scientist = await buildUser({ role: 'scientist', name: 'Sami Scientist' });
-  const formulatorAgent = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
-  const scientistAgent = await signedInAgent(stack.app, scientist);
+  const formulatorAgent = await signedInAgent(suite.stack.app, await buildUser({ role: 'formulator' }));
+  const scientistAgent = await signedInAgent(suite.stack.app, scientist);
   const onset = gelOnset(cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }), 0.2).spinodalB2!;
   for (const [i, weaker] of [0.25, 0.45, 1.5, -0.5].entries()) {
     const input = recipeInput(programme, lib, { name: `Coating base ${i + 1}`, fraction: { kind: 'volume', value: 0.2 }, attraction: { source: 'direct', contactEnergyKT: squareWellDepthFromReducedB2(onset + weaker, 1.1), rangeSigma: 0.1 } });
@@ -51,10 +49,6 @@ beforeAll(async () => {
   await recordBench(scientistAgent, programme, 48, 3);
   await recordBench(scientistAgent, small, 5, 4);
 });
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
-});
 
 async function expectAccessible(page: Page) {
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
@@ -62,8 +56,8 @@ async function expectAccessible(page: Page) {
 
 describe('calibrating a programme to its bench', () => {
   it('a manager fits and accepts a calibration; the map is drawn calibrated with a switch back to the theory; withdrawing restores it', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, manager.email, manager.password);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, manager.email, manager.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Calibrate' }).click();
     await page.getByRole('heading', { name: 'Calibrate', level: 1 }).waitFor();
     await page.getByLabel('Programme').selectOption(String(programme.id));
@@ -126,7 +120,7 @@ describe('calibrating a programme to its bench', () => {
     await page.getByLabel('Calibrated boundary').click();
     await expect.poll(() => page.locator('[data-line="calibrated-gel"]').count()).toBe(0);
 
-    await page.goto(`${stack.url}/calibrate?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/calibrate?programme=${programme.id}`);
     await page.getByRole('button', { name: 'Withdraw the calibration…' }).waitFor();
     // The history offers the same way back on the calibration in use.
     await page.getByRole('table', { name: 'Calibration history' }).getByRole('button', { name: 'Withdraw…' }).click();
@@ -142,16 +136,16 @@ describe('calibrating a programme to its bench', () => {
   });
 
   it('a scientist may fit but not accept, and is told how many observations a fit needs', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, scientist.email, scientist.password);
-    await page.goto(`${stack.url}/calibrate?programme=${small.id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, scientist.email, scientist.password);
+    await page.goto(`${suite.stack.url}/calibrate?programme=${small.id}`);
     await page.getByRole('button', { name: 'Fit to the bench' }).click();
     await page.getByText('Not enough to fit yet').waitFor();
     expect(await page.getByRole('alert').filter({ hasText: 'needs at least 8 observations on each side of the gel boundary' }).count()).toBe(1);
     await expectAccessible(page);
     await screenshot(page, 'calibrate-refused');
 
-    await page.goto(`${stack.url}/calibrate?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/calibrate?programme=${programme.id}`);
     await page.getByTestId('calibration-result').waitFor();
     expect(await page.getByRole('button', { name: /^Accept/ }).count()).toBe(0);
     expect(await page.getByRole('button', { name: /^Withdraw/ }).count()).toBe(0);

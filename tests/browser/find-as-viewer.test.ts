@@ -1,28 +1,26 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { STATE_DESCRIPTIONS, STATE_LABELS, type PredictedState } from '../../shared/states';
 import type { RecipeDerived } from '../../shared/views/team-data';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
 let lib: Library;
 let programme: Programme;
 let viewer: TestUser;
 let recipe: { id: number; code: string; name: string; derived: RecipeDerived };
 let shortlistId: number;
 
+const suite = withBrowserStack();
+
 beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
   lib = await buildLibrary();
   programme = await buildProgramme({ name: 'Thixotropic primers' });
-  const formulator = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+  const formulator = await signedInAgent(suite.stack.app, await buildUser({ role: 'formulator' }));
   const created = await formulator
     .post('/api/recipes')
     .send(recipeInput(programme, lib, { name: 'Primer base with silica', notes: 'Sag-resistant primer base; thins when brushed, sets again within a minute.' }));
@@ -32,14 +30,10 @@ beforeAll(async () => {
   expect(shortlist.status).toBe(201);
   shortlistId = shortlist.body.shortlist.id;
   expect((await formulator.post(`/api/shortlists/${shortlistId}/submit`)).status).toBe(200);
-  const scientist = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
+  const scientist = await signedInAgent(suite.stack.app, await buildUser({ role: 'scientist' }));
   const observed = await scientist.post('/api/observations').send({ recipeId: recipe.id, mixedAt: '2026-01-20', ageDays: 14, observedState: 'gel', method: 'rheology', storageModulusPa: 120 });
   expect(observed.status).toBe(201);
   viewer = await buildUser({ role: 'viewer', name: 'Vera Newhire' });
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
 });
 
 async function expectAccessible(page: Page) {
@@ -55,8 +49,8 @@ const READING_BUTTONS = new Set(['Find', 'Clear filters', 'Newer', 'Older', 'Try
 
 describe('a viewer looks things up', () => {
   it('finds a recipe by its code and reads where it sits, why, how close to a boundary, what the bench saw, and the cautions', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, viewer.email, viewer.password);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, viewer.email, viewer.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Find' }).click();
     await page.getByRole('heading', { name: 'Find', level: 1 }).waitFor();
     await expectAccessible(page);
@@ -90,10 +84,10 @@ describe('a viewer looks things up', () => {
   });
 
   it('sees no edit controls on the library, the bench log or the shortlists, and the server refuses a change anyway', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, viewer.email, viewer.password);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, viewer.email, viewer.password);
 
-    await page.goto(`${stack.url}/library`);
+    await page.goto(`${suite.stack.url}/library`);
     for (const tab of ['Particles', 'Depletants', 'Solvents', 'Salts']) {
       await page.getByRole('tab', { name: tab }).click();
       await page.getByRole('table', { name: `${tab} in the library` }).waitFor();
@@ -107,14 +101,14 @@ describe('a viewer looks things up', () => {
     await expect.poll(() => page.getByRole('tab', { name: 'Particles' }).getAttribute('aria-selected')).toBe('true');
     await page.getByRole('table', { name: 'Particles in the library' }).getByRole('cell', { name: lib.particle.name }).waitFor();
 
-    await page.goto(`${stack.url}/bench?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/bench?programme=${programme.id}`);
     await page.getByRole('table', { name: /Bench log/ }).getByRole('link', { name: recipe.code }).waitFor();
     expect((await mainButtons(page)).filter((b) => !READING_BUTTONS.has(b))).toEqual([]);
     await page.getByRole('link', { name: 'Export these observations as CSV' }).waitFor();
     await expectAccessible(page);
     await screenshot(page, 'bench-viewer');
 
-    await page.goto(`${stack.url}/shortlists?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/shortlists?programme=${programme.id}`);
     await page.getByRole('link', { name: 'Primer candidates' }).click();
     await page.getByRole('heading', { name: 'Primer candidates' }).waitFor();
     await page.getByRole('list', { name: `Bench observations of ${recipe.code}` }).waitFor();
@@ -123,11 +117,11 @@ describe('a viewer looks things up', () => {
     await expectAccessible(page);
     await screenshot(page, 'shortlist-viewer');
 
-    await page.goto(`${stack.url}/shortlists?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/shortlists?programme=${programme.id}`);
     expect((await mainButtons(page)).filter((b) => !READING_BUTTONS.has(b))).toEqual([]);
     await expectAccessible(page);
 
-    const refused = await page.request.post(`${stack.url}/api/materials/salts`, { data: { name: 'Viewer salt', valence: 1 } });
+    const refused = await page.request.post(`${suite.stack.url}/api/materials/salts`, { data: { name: 'Viewer salt', valence: 1 } });
     expect(refused.status()).toBe(403);
     expect(unexpected()).toEqual([]);
     await context.close();

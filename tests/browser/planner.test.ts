@@ -1,38 +1,32 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { Plan, Recipe, Shortlist, type Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
 // All data invented. The planner's science is checked in shared/planning/*.test.ts.
 
-let stack: TestStack;
-let browser: Browser;
 let lib: Library;
 let programme: Programme;
 let formulator: TestUser;
 let viewer: TestUser;
 
+const suite = withBrowserStack();
+
 beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
   lib = await buildLibrary();
   programme = await buildProgramme({ name: 'Planned primer gels', goalState: 'gel', attractionSource: 'depletion' });
   formulator = await buildUser({ role: 'formulator', name: 'Pia Planner' });
   viewer = await buildUser({ role: 'viewer', name: 'Vic Viewer' });
   // One recipe on the bench already, observed as a gel, so the list has evidence to show.
   const scientist = await buildUser({ role: 'scientist' });
-  const recipe = await (await signedInAgent(stack.app, formulator)).post('/api/recipes').send(recipeInput(programme, lib, { fraction: { kind: 'volume', value: 0.2 }, attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 11 } }));
+  const recipe = await (await signedInAgent(suite.stack.app, formulator)).post('/api/recipes').send(recipeInput(programme, lib, { fraction: { kind: 'volume', value: 0.2 }, attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 11 } }));
   expect(recipe.status).toBe(201);
-  const observed = await (await signedInAgent(stack.app, scientist)).post('/api/observations').send({ recipeId: recipe.body.recipe.id, mixedAt: '2026-03-02', ageDays: 7, observedState: 'gel', method: 'visual' });
+  const observed = await (await signedInAgent(suite.stack.app, scientist)).post('/api/observations').send({ recipeId: recipe.body.recipe.id, mixedAt: '2026-03-02', ageDays: 7, observedState: 'gel', method: 'visual' });
   expect(observed.status).toBe(201);
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
 });
 
 async function expectAccessible(page: Page) {
@@ -56,11 +50,11 @@ async function fillRequest(page: Page, values: { polymerTo: string; margin: stri
 
 describe('planning gels', () => {
   it('a formulator plans gels, turns two candidates into recipes and a shortlist, and finds them on the map and in the shortlist', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Planner' }).click();
     await page.getByRole('heading', { name: 'Planner', level: 1 }).waitFor();
-    await page.goto(`${stack.url}/plan?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/plan?programme=${programme.id}`);
     await page.getByText('No plan open').waitFor();
     await expectAccessible(page);
     await screenshot(page, 'planner-empty');
@@ -105,14 +99,14 @@ describe('planning gels', () => {
     await expectAccessible(page);
     await screenshot(page, 'planner-shortlist');
 
-    await page.goto(`${stack.url}/map?programme=${programme.id}`);
+    await page.goto(`${suite.stack.url}/map?programme=${programme.id}`);
     await page.getByRole('img', { name: /^State map of Planned primer gels/ }).waitFor();
     await page.getByText(/^List the \d+ points? on this map$/).click();
     for (const recipe of made) await expect.poll(() => page.locator(`tr[data-point="r${recipe.id}"]`).textContent()).toContain(recipe.code);
     await expectAccessible(page);
     await screenshot(page, 'planner-recipes-on-map');
 
-    await page.goto(`${stack.url}/recipes/${codes[0]}`);
+    await page.goto(`${suite.stack.url}/recipes/${codes[0]}`);
     await page.getByRole('link', { name: `From plan ${planId}` }).click();
     await page.waitForURL(new RegExp(`/plan\\?programme=${programme.id}&plan=${planId}$`));
     await page.getByRole('heading', { name: new RegExp(`^Plan ${planId} · `) }).waitFor();
@@ -121,9 +115,9 @@ describe('planning gels', () => {
   });
 
   it('advises what to relax when nothing fits, plans again with it, and sends next experiments to the bench; a viewer reads the plans', async () => {
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
-    await page.goto(`${stack.url}/plan?programme=${programme.id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/plan?programme=${programme.id}`);
     const form = await fillRequest(page, { polymerTo: '3', margin: '0.1', candidates: '4' });
     await form.getByRole('button', { name: 'Plan compositions' }).click();
     await page.getByText('Nothing in these ranges meets the request').waitFor();
@@ -150,9 +144,9 @@ describe('planning gels', () => {
     expect(unexpected()).toEqual([]);
     await context.close();
 
-    const reader = await openCheckedPage(browser);
-    await signInThroughForm(reader.page, stack.url, viewer.email, viewer.password);
-    await reader.page.goto(`${stack.url}/plan?programme=${programme.id}&plan=${planId}`);
+    const reader = await openCheckedPage(suite.browser);
+    await signInThroughForm(reader.page, suite.stack.url, viewer.email, viewer.password);
+    await reader.page.goto(`${suite.stack.url}/plan?programme=${programme.id}&plan=${planId}`);
     await reader.page.getByRole('heading', { name: new RegExp(`^Plan ${planId} · `) }).waitFor();
     await reader.page.getByText('Plans are made by formulators').waitFor();
     expect(await reader.page.getByRole('form', { name: 'Plan' }).count()).toBe(0);

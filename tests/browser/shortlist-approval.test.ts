@@ -1,37 +1,31 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
-import { launchBrowser, openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
 import { buildUser, latestMailTo, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
-import { startTestStack, type TestStack } from '../support/test-stack';
 
-let stack: TestStack;
-let browser: Browser;
 let programme: Programme;
 let formulator: TestUser;
 let manager: TestUser;
 let formulatorAgent: Awaited<ReturnType<typeof signedInAgent>>;
 const recipes: { id: number; code: string; name: string }[] = [];
 
+const suite = withBrowserStack();
+
 beforeAll(async () => {
-  stack = await startTestStack({ listen: true });
-  browser = await launchBrowser();
   const lib = await buildLibrary();
   programme = await buildProgramme({ name: 'Shelf-stable gels', goalState: 'gel' });
   formulator = await buildUser({ role: 'formulator', name: 'Farah Formulator' });
   manager = await buildUser({ role: 'manager', name: 'Mads Manager' });
-  formulatorAgent = await signedInAgent(stack.app, formulator);
+  formulatorAgent = await signedInAgent(suite.stack.app, formulator);
   for (const concentrationGL of [6, 12]) {
     const created = await formulatorAgent.post('/api/recipes').send(recipeInput(programme, lib, { attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL } }));
     expect(created.status).toBe(201);
     recipes.push(created.body.recipe);
   }
-});
-afterAll(async () => {
-  await browser?.close();
-  await stack?.close();
 });
 
 async function expectAccessible(page: Page) {
@@ -48,9 +42,9 @@ describe('a shortlist from draft to approval', () => {
   it('a formulator creates and submits a shortlist, a manager approves it, and the approval mail reaches the author', async () => {
     const [first, second] = recipes;
     const title = `Thirty-day shelf candidates ${Date.now().toString(36)}`;
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
-    await page.goto(`${stack.url}/shortlists?programme=${programme.id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/shortlists?programme=${programme.id}`);
     await page.getByText('No shortlist in this programme yet').waitFor();
     await expectAccessible(page);
     await screenshot(page, 'shortlists-empty');
@@ -91,7 +85,7 @@ describe('a shortlist from draft to approval', () => {
     const detailUrl = page.url();
     await signOut(page);
 
-    await signInThroughForm(page, stack.url, manager.email, manager.password);
+    await signInThroughForm(page, suite.stack.url, manager.email, manager.password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Shortlists' }).click();
     await page.getByRole('heading', { name: 'Shortlists', level: 1 }).waitFor();
     await page.getByLabel('Programme').selectOption(String(programme.id));
@@ -126,9 +120,9 @@ describe('a shortlist from draft to approval', () => {
     const id = created.body.shortlist.id;
     expect((await formulatorAgent.post(`/api/shortlists/${id}/submit`)).status).toBe(200);
 
-    const { page, context, unexpected } = await openCheckedPage(browser);
-    await signInThroughForm(page, stack.url, manager.email, manager.password);
-    await page.goto(`${stack.url}/shortlists/${id}`);
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, manager.email, manager.password);
+    await page.goto(`${suite.stack.url}/shortlists/${id}`);
     await page.getByRole('button', { name: 'Return to the author' }).click();
     await page.getByText('Say what the author should change: returning needs a comment').waitFor();
     await page.getByLabel('Comment for the author').fill('Add a recipe on the dense side too.');
@@ -137,8 +131,8 @@ describe('a shortlist from draft to approval', () => {
     await screenshot(page, 'shortlist-returned');
     await signOut(page);
 
-    await signInThroughForm(page, stack.url, formulator.email, formulator.password);
-    await page.goto(`${stack.url}/shortlists/${id}`);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/shortlists/${id}`);
     await page.getByText('Add a recipe on the dense side too.').first().waitFor();
     await page.getByRole('button', { name: 'Reopen as a draft' }).click();
     await page.getByRole('button', { name: 'Edit the draft' }).waitFor();
