@@ -44,16 +44,16 @@ const shortLabel = (label: string) => label.split(' (')[0];
 
 /**
  * Where a marker's label goes: to the right of the marker, or to its left when it would run off
- * the plot. About 6 px per character at 11 px.
+ * the plot; null when it fits on neither side (the marker's tooltip still names it). About 6 px
+ * per character at 11 px.
  */
-function markerLabelSpot(m: { x: number; y: number; label: string }, scales: MapScales): { dx: number; anchor: 'start' | 'end'; box: Box } {
+function markerLabelSpot(m: { x: number; y: number; label: string }, scales: MapScales): { dx: number; anchor: 'start' | 'end'; box: Box } | null {
   const x = scales.x(m.x);
   const y = scales.y(m.y);
   const width = shortLabel(m.label).length * 6;
-  const right = x + 7 + width <= scales.inner.width - 2;
-  return right
-    ? { dx: 7, anchor: 'start', box: { x0: x - 6, y0: y - 18, x1: x + 10 + width, y1: y + 6 } }
-    : { dx: -7, anchor: 'end', box: { x0: x - 10 - width, y0: y - 18, x1: x + 6, y1: y + 6 } };
+  if (x + 7 + width <= scales.inner.width - 2) return { dx: 7, anchor: 'start', box: { x0: x - 6, y0: y - 18, x1: x + 10 + width, y1: y + 6 } };
+  if (x - 7 - width >= 2) return { dx: -7, anchor: 'end', box: { x0: x - 10 - width, y0: y - 18, x1: x + 6, y1: y + 6 } };
+  return null;
 }
 
 /** A region's name is drawn where it fits; null when its spot is too near the edge. */
@@ -69,7 +69,7 @@ function regionLabelSpot(region: StateRegion, scales: MapScales): { x: number; y
 
 /** The space the marker and region labels take, kept free of line labels. */
 function reservedBoxes(drawing: MapDrawing, regions: StateRegion[], scales: MapScales, layers: Set<Layer>): Box[] {
-  const boxes = drawing.markers.map((m) => markerLabelSpot(m, scales).box);
+  const boxes = drawing.markers.flatMap((m) => markerLabelSpot(m, scales)?.box ?? []);
   if (layers.has('regions')) for (const region of regions) {
     const spot = regionLabelSpot(region, scales);
     if (spot) boxes.push(spot.box);
@@ -145,7 +145,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
               <g key={m.id} transform={`translate(${scales.x(m.x)},${scales.y(m.y)})`} data-marker={m.id}>
                 {m.reference ? <path d="M-5,-5L5,5M-5,5L5,-5" stroke="#1c2630" strokeWidth={1.6} /> : <circle r={4.5} fill="#1c2630" stroke="#ffffff" strokeWidth={1.5} />}
                 <title>{m.label}</title>
-                {layers.has('labels') && (
+                {layers.has('labels') && spot && (
                   <text x={spot.dx} y={-6} textAnchor={spot.anchor} fontSize={11} fill="#1c2630" paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
                     {shortLabel(m.label)}
                   </text>
