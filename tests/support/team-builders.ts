@@ -1,24 +1,34 @@
 import { randomBytes } from 'node:crypto';
+import { UniqueConstraintError } from 'sequelize';
 import { PNG } from 'pngjs';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import { Depletant, ParticleSystem, Programme, Salt, Solvent } from '../../server/models';
 
-/** Two to five capital letters no other programme in this database uses. */
-export function uniquePrefix() {
+/** A random five-letter code prefix (the column holds five): 24⁵ ≈ 8 million of them. */
+function randomPrefix() {
   const letters = 'ABCDEFGHJKLMNPQRSTUVWXYZ';
-  const bytes = randomBytes(4);
-  return Array.from(bytes, (b) => letters[b % letters.length]).join('');
+  return Array.from(randomBytes(5), (b) => letters[b % letters.length]).join('');
 }
 
+/**
+ * A programme with a code prefix no other programme of the database has: a worker's database
+ * keeps every file's programmes, so a random prefix is retried when it is taken.
+ */
 export async function buildProgramme(overrides: Partial<{ name: string; goalState: Programme['goalState']; attractionSource: Programme['attractionSource'] }> = {}) {
-  return Programme.create({
-    name: overrides.name ?? `Programme ${randomBytes(3).toString('hex')}`,
-    goalState: overrides.goalState ?? 'gel',
-    attractionSource: overrides.attractionSource ?? 'depletion',
-    codePrefix: uniquePrefix(),
-    notes: null,
-    createdBy: null,
-  });
+  for (let attempt = 0; ; attempt++) {
+    try {
+      return await Programme.create({
+        name: overrides.name ?? `Programme ${randomBytes(3).toString('hex')}`,
+        goalState: overrides.goalState ?? 'gel',
+        attractionSource: overrides.attractionSource ?? 'depletion',
+        codePrefix: randomPrefix(),
+        notes: null,
+        createdBy: null,
+      });
+    } catch (error) {
+      if (!(error instanceof UniqueConstraintError) || attempt >= 5) throw error;
+    }
+  }
 }
 
 /**
