@@ -54,6 +54,29 @@ describe('from a new recipe to the map', () => {
     await context.close();
   });
 
+  it('keeps both of two view changes made before the map renders again', async () => {
+    const programme = await buildProgramme({ name: 'Two quick changes', attractionSource: 'salt' });
+    const viewer = await buildUser({ role: 'viewer' });
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, viewer.email, viewer.password);
+    await page.goto(`${suite.stack.url}/map?programme=${programme.id}`);
+    await page.getByRole('img', { name: /^State map of Two quick changes/ }).waitFor();
+    const axis = await page.getByLabel('Attraction axis').elementHandle();
+    const theory = await page.getByLabel('Fluid–fluid theory').elementHandle();
+    // Both changes in one task, as a fast hand or a script makes them: React renders once after both.
+    await page.evaluate(([a, t]) => {
+      (a as HTMLSelectElement).value = 'inverseTau';
+      a!.dispatchEvent(new Event('change', { bubbles: true }));
+      (t as HTMLSelectElement).value = 'baxterPY';
+      t!.dispatchEvent(new Event('change', { bubbles: true }));
+    }, [axis, theory] as const);
+    await expect.poll(() => new URL(page.url()).searchParams.get('theory')).toBe('baxterPY');
+    expect(new URL(page.url()).searchParams.get('axis')).toBe('inverseTau');
+    await expect.poll(() => page.getByLabel('Attraction axis').inputValue()).toBe('inverseTau');
+    expect(unexpected()).toEqual([]);
+    await context.close();
+  });
+
   it("restores the map's view from its URL: axis, theory, layers and zoom", async () => {
     const lib = await buildLibrary();
     const programme = await buildProgramme({ name: 'URL view programme', attractionSource: 'salt' });

@@ -1,5 +1,5 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
-import { useNavigate, useSearchParams } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { can } from '@shared/permissions';
 import { Card, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
@@ -25,6 +25,7 @@ import { ProgrammePicker } from '@/features/programmes/components/programme-pick
 import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
 import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
 import { formatDate } from '@/lib/format';
+import { useUrlParams } from '@/lib/use-url-params';
 
 function median(values: number[]) {
   if (values.length === 0) return null;
@@ -66,7 +67,7 @@ function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; c
 }
 
 function MapScreen({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
   const sizeRatio = useMemo(() => {
     const column = data.recipes.columns.indexOf('sizeRatio');
@@ -74,8 +75,8 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
   }, [data]);
   const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
   const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');
-  // Every change is applied to the latest URL, not to this render's view: two quick changes in
-  // a row (axis, then theory) must both survive.
+  // Every change is applied to the newest parameters (useUrlParams), not to this render's view:
+  // two quick changes in a row (axis, then theory) must both survive.
   const setView = useCallback(
     (change: Partial<MapView> | ((current: MapView) => Partial<MapView>)) =>
       setParams((previous) => {

@@ -1,4 +1,3 @@
-import { useSearchParams } from 'react-router-dom';
 import { can } from '@shared/permissions';
 import { STATE_LABELS } from '@shared/states';
 import type { PlanView } from '@shared/views/plan';
@@ -12,6 +11,7 @@ import { SafetyNote } from '@/features/cautions/safety-note';
 import { PlanMap } from '@/features/map/components/plan-map';
 import { defaultPlanInput, doseText, ExperimentList, PlanAdviceNotice, PlanCandidates, PlanForm, PlanHistory, PlanOverview, useCreatePlan, usePlan, usePlanMaterials } from '@/features/planner';
 import { ProgrammeGate, ProgrammePicker, useProgrammeParam } from '@/features/programmes';
+import { useUrlParams } from '@/lib/use-url-params';
 
 const PLAN_PARAM = 'plan';
 
@@ -33,7 +33,7 @@ export function PlanRoute() {
 }
 
 function PlannerScreen({ programme, canPlan }: { programme: ProgrammeView; canPlan: boolean }) {
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   const raw = Number(params.get(PLAN_PARAM));
   const planId = Number.isInteger(raw) && raw > 0 ? raw : null;
   const plan = usePlan(planId);

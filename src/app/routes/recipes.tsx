@@ -1,4 +1,4 @@
-import { Link, useSearchParams } from 'react-router-dom';
+import { Link } from 'react-router-dom';
 import { can } from '@shared/permissions';
 import { PREDICTED_STATES, type PredictedState } from '@shared/states';
 import { RECIPE_SORTS } from '@shared/schemas/recipes';
@@ -9,6 +9,7 @@ import { ProgrammePicker } from '@/features/programmes/components/programme-pick
 import { useProgrammeParam, withProgramme } from '@/features/programmes/hooks/use-programme-param';
 import type { RecipeFilters } from '@/features/recipes/api/recipe-keys';
 import { RecipesTable } from '@/features/recipes/components/recipes-table';
+import { useUrlParams } from '@/lib/use-url-params';
 
 /** Reads the table's filters from the URL, so a filtered, sorted page can be linked. */
 function filtersFrom(params: URLSearchParams, programme: number): RecipeFilters {
@@ -31,7 +32,7 @@ function filtersFrom(params: URLSearchParams, programme: number): RecipeFilters 
 export function RecipesRoute() {
   const { data: user } = useSession();
   const selection = useProgrammeParam();
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   return (
     <>
       <PageHeader

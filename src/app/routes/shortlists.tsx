@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { useLocation, useNavigate, useSearchParams } from 'react-router-dom';
+import { useLocation, useNavigate } from 'react-router-dom';
 import { can } from '@shared/permissions';
 import { SHORTLIST_STATUSES, type ShortlistStatus } from '@shared/states';
 import { Button } from '@/components/ui/button';
@@ -12,11 +12,12 @@ import { ProgrammeGate, ProgrammePicker, useProgrammeParam } from '@/features/pr
 import { ShortlistForm } from '@/features/shortlists/components/shortlist-form';
 import { ShortlistList } from '@/features/shortlists/components/shortlist-list';
 import { STATUS_LABELS } from '@/features/shortlists/components/shortlist-status';
+import { useUrlParams } from '@/lib/use-url-params';
 
 export function ShortlistsRoute() {
   const { data: user } = useSession();
   const selection = useProgrammeParam();
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
   const location = useLocation();
   const [creating, setCreating] = useState(false);

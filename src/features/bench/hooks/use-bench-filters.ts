@@ -1,7 +1,7 @@
 import { useCallback } from 'react';
-import { useSearchParams } from 'react-router-dom';
 import { OBSERVATION_METHODS, OBSERVED_STATES, type ObservationMethod, type ObservedState } from '@shared/states';
 import type { ObservationFilters } from '../api/observation-keys';
+import { useUrlParams } from '@/lib/use-url-params';
 
 /** What the filter controls show; kept in the URL so a copied link opens the same slice of the log. */
 export interface BenchFilterValues {
@@ -15,7 +15,7 @@ export interface BenchFilterValues {
 const ageOrUndefined = (text: string) => (text.trim() === '' || !Number.isFinite(Number(text)) || Number(text) < 0 ? undefined : Number(text));
 
 export function useBenchFilters(programmeId: number) {
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   const state = params.get('state');
   const method = params.get('method');
   const values: BenchFilterValues = {

@@ -1,7 +1,7 @@
 import { useCallback } from 'react';
-import { useSearchParams } from 'react-router-dom';
 import type { ProgrammeView } from '@shared/views/team-data';
 import { useProgrammes } from '../api/get-programmes';
+import { useUrlParams } from '@/lib/use-url-params';
 
 /** The search parameter that carries the chosen programme, so a copied link opens the same one. */
 export const PROGRAMME_PARAM = 'programme';
@@ -32,7 +32,7 @@ export interface ProgrammeSelection {
  * The fallback is not written back to the URL: the address stays what the person typed or followed.
  */
 export function useProgrammeParam(): ProgrammeSelection {
-  const [params, setParams] = useSearchParams();
+  const [params, setParams] = useUrlParams();
   const programmes = useProgrammes();
   const raw = Number(params.get(PROGRAMME_PARAM));
   const requested = Number.isInteger(raw) && raw > 0 ? raw : null;
