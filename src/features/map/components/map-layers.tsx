@@ -57,23 +57,33 @@ function markerLabelSpot(m: { x: number; y: number; label: string }, scales: Map
 }
 
 /** A region's name is drawn where it fits; null when its spot is too near the edge. */
-function regionLabelSpot(region: StateRegion, scales: MapScales): { x: number; y: number; box: Box } | null {
+function regionLabelSpot(region: StateRegion, scales: MapScales, avoid: Box[]): { x: number; y: number; box: Box } | null {
   if (!region.labelAt) return null;
   const x = scales.x(region.labelAt[0]);
-  const y = scales.y(region.labelAt[1]);
-  if (x < 20 || y < 14 || x > scales.inner.width - 20 || y > scales.inner.height - 6) return null;
+  const y0 = scales.y(region.labelAt[1]);
   // About 7.5 px per character at 13 px semibold, centred on the spot.
   const half = (REGION_LABEL(region.state).length * 7.5) / 2;
-  return { x, y, box: { x0: x - half, y0: y - 13, x1: x + half, y1: y + 3 } };
+  if (x < 20 || x > scales.inner.width - 20) return null;
+  // The region's own spot, or a line above or below it when a marker's label is there.
+  for (const dy of [0, 18, -18, 36, -36]) {
+    const y = y0 + dy;
+    if (y < 14 || y > scales.inner.height - 6) continue;
+    const box = { x0: x - half, y0: y - 13, x1: x + half, y1: y + 3 };
+    if (!avoid.some((b) => overlaps(b, box))) return { x, y, box };
+  }
+  return y0 >= 14 && y0 <= scales.inner.height - 6 ? { x, y: y0, box: { x0: x - half, y0: y0 - 13, x1: x + half, y1: y0 + 3 } } : null;
+}
+
+/** Each region's label spot, kept off the markers' labels. */
+function regionLabelSpots(drawing: MapDrawing, regions: StateRegion[], scales: MapScales) {
+  const markers = drawing.markers.flatMap((m) => markerLabelSpot(m, scales)?.box ?? []);
+  return new Map(regions.map((region) => [region.state, regionLabelSpot(region, scales, markers)]));
 }
 
 /** The space the marker and region labels take, kept free of line labels. */
-function reservedBoxes(drawing: MapDrawing, regions: StateRegion[], scales: MapScales, layers: Set<Layer>): Box[] {
+function reservedBoxes(drawing: MapDrawing, regionSpots: Map<string, { box: Box } | null>, scales: MapScales, layers: Set<Layer>): Box[] {
   const boxes = drawing.markers.flatMap((m) => markerLabelSpot(m, scales)?.box ?? []);
-  if (layers.has('regions')) for (const region of regions) {
-    const spot = regionLabelSpot(region, scales);
-    if (spot) boxes.push(spot.box);
-  }
+  if (layers.has('regions')) for (const spot of regionSpots.values()) if (spot) boxes.push(spot.box);
   return boxes;
 }
 
@@ -113,6 +123,7 @@ export function placeLineLabels(lines: { id: string; label: string; points: XY[]
 }
 
 export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawing: MapDrawing; regions: StateRegion[]; scales: MapScales; layers: Set<Layer>; clipId: string }) {
+  const regionSpots = regionLabelSpots(drawing, regions, scales);
   return (
     <>
       <defs>
@@ -155,7 +166,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
           })}
         {layers.has('labels') && layers.has('regions') &&
           regions.map((region) => {
-            const spot = regionLabelSpot(region, scales);
+            const spot = regionSpots.get(region.state);
             if (!spot) return null;
             return (
               <text key={region.state} x={spot.x} y={spot.y} textAnchor="middle" fontSize={13} fontWeight={600} fill={REGION_INK(region.state)} opacity={0.9} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
@@ -164,7 +175,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
             );
           })}
         {layers.has('labels') && layers.has('lines') &&
-          [...placeLineLabels(drawing.lines, scales, reservedBoxes(drawing, regions, scales, layers)).entries()].map(([id, spot]) => {
+          [...placeLineLabels(drawing.lines, scales, reservedBoxes(drawing, regionSpots, scales, layers)).entries()].map(([id, spot]) => {
             const l = drawing.lines.find((line) => line.id === id)!;
             return (
               <text key={id} x={spot.x} y={spot.y} textAnchor={spot.anchor} fontSize={10.5} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
