@@ -63,7 +63,8 @@ describe('a viewer looks things up', () => {
     expect(await page.getByTestId('predicted-state').textContent()).toBe(`${STATE_LABELS[predicted]}. ${STATE_DESCRIPTIONS[predicted]}`);
     if (recipe.derived.reason) expect(await page.getByTestId('prediction-reason').textContent()).toContain(recipe.derived.reason);
     if (recipe.derived.nearestBoundary) expect(await page.getByTestId('nearest-boundary').textContent()).toContain(recipe.derived.nearestBoundary.label);
-    if (recipe.derived.marginDescription) expect(await page.getByTestId('margin-description').textContent()).toBe(`In map terms: ${recipe.derived.marginDescription}`);
+    // Symbols are typeset (φ_p^R as φ with sub- and superscript), so the page's text has no _ or ^.
+    if (recipe.derived.marginDescription) expect(await page.getByTestId('margin-description').textContent()).toBe(`In map terms: ${recipe.derived.marginDescription.replace(/[_^]/g, '')}`);
     expect(await page.getByTestId('bench-summary').textContent()).toMatch(/^Observed once: 1 gel\. /);
     await page.getByRole('complementary', { name: 'Cautions' }).getByText('safety data sheet').waitFor();
     expect(await page.getByRole('link', { name: `Open the full recipe ${recipe.code}` }).getAttribute('href')).toBe(`/recipes/${recipe.code}`);

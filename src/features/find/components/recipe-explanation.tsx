@@ -9,6 +9,7 @@ import { formatDate, formatNumber } from '@/lib/format';
 import { useRecipeByCode } from '../api/get-recipe-by-code';
 import { BenchSummary } from './bench-summary';
 import { termsIn } from './glossary';
+import { SymbolText } from '@/components/ui/symbol-text';
 
 /** Within 5 % of the map's size from a boundary, a recipe is called close (the margin is in normalised map units). */
 const CLOSE_MARGIN = 0.05;
@@ -92,7 +93,7 @@ export function RecipeExplanation({ code, programmeName, cautions }: { code: str
             )}
             {d.marginDescription && (
               <p className="text-xs text-ink-soft" data-testid="margin-description">
-                In map terms: {d.marginDescription}
+                In map terms: <SymbolText text={d.marginDescription} />
               </p>
             )}
           </Part>

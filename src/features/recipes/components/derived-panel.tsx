@@ -47,7 +47,7 @@ export function DerivedPanel({ derived, title = 'Derived parameters' }: { derive
       {derived.nearestBoundary && (
         <p className="mb-3 text-sm text-ink-soft">
           Nearest boundary: <strong className="text-ink">{derived.nearestBoundary.label}</strong>
-          {derived.marginDescription ? ` — ${derived.marginDescription}` : ''}
+          {derived.marginDescription ? <> — <SymbolText text={derived.marginDescription} /></> : ''}
         </p>
       )}
       {derived.warnings.length > 0 && (

@@ -6,6 +6,7 @@ import { StateBadge } from '@/components/ui/state-badge';
 import { EmptyState } from '@/components/ui/states';
 import { formatNumber } from '@/lib/format';
 import { RecipeEvidence } from './recipe-evidence';
+import { SymbolText } from '@/components/ui/symbol-text';
 
 /** The shortlisted recipes in the author's order: prediction, margin, the author's reason and the bench evidence. */
 export function ShortlistItems({ items, targetState }: { items: ShortlistItemView[]; targetState: GoalState }) {
@@ -39,7 +40,7 @@ export function ShortlistItems({ items, targetState }: { items: ShortlistItemVie
                     {recipe.derived.margin !== null && recipe.derived.nearestBoundary
                       ? `${formatNumber(recipe.derived.margin * 100, 2)} % of the map from ${recipe.derived.nearestBoundary.label}`
                       : 'No boundary named'}
-                    {recipe.derived.marginDescription && <span className="block text-xs text-ink-soft">{recipe.derived.marginDescription}</span>}
+                    {recipe.derived.marginDescription && <span className="block text-xs text-ink-soft"><SymbolText text={recipe.derived.marginDescription} /></span>}
                   </dd>
                   <dt className="text-ink-soft">Reason</dt>
                   <dd className="whitespace-pre-line">{item.reason}</dd>
