@@ -50,6 +50,9 @@ describe('POST /api/observations', () => {
     expect(unclear.body.observation.agrees).toBeNull();
     const disagreeing = await scientist.get(`/api/observations?recipe=${recipe.id}&disagreeing=true`);
     expect(disagreeing.body.items.map((o: { id: number }) => o.id)).toEqual([differs.body.observation.id]);
+    // The answer to the write is what the database now holds, field for field.
+    const stored = await scientist.get(`/api/observations/${same.body.observation.id}`);
+    expect(stored.body.observation).toEqual(same.body.observation);
   });
 
   it('records an ad-hoc composition with its own prediction', async () => {
@@ -57,6 +60,8 @@ describe('POST /api/observations', () => {
     expect(response.status).toBe(201);
     expect(response.body.observation.adhoc).toEqual({ phi: 0.2, reducedB2: -6, description: 'leftover batch, no recipe' });
     expect(['fluid', 'gel', 'glass', 'crystal', 'separated']).toContain(response.body.observation.predictedState);
+    const stored = await scientist.get(`/api/observations/${response.body.observation.id}`);
+    expect(stored.body.observation).toEqual(response.body.observation);
   });
 
   it('refuses both a recipe and an ad-hoc composition, a future-less date, a negative age', async () => {
