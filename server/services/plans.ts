@@ -73,9 +73,10 @@ async function boundaryUncertainty(calibration: { id: number } | null, transacti
 async function programmeEvidence(sequelize: Sequelize, programmeId: number, space: CompositionSpace): Promise<EvidenceInput[]> {
   const points = await buildMapPoints(sequelize, programmeId);
   const mapQ = space.map.model.kind === 'depletion' ? space.map.model.q : null;
-  const recipes = new Map(decodeMapRecipes(points).map((r) => [r.id, r]));
+  const recipeList = decodeMapRecipes(points);
+  const recipes = new Map(recipeList.map((r) => [r.id, r]));
   const latest = new Map<string, EvidenceInput>();
-  for (const o of decodeMapObservations(points, [...recipes.values()])) {
+  for (const o of decodeMapObservations(points, recipeList)) {
     const { id, recipeId, observedState, ageDays } = o;
     if (observedState === 'unclear') continue;
     let item: EvidenceInput | null = null;

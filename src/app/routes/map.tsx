@@ -26,6 +26,7 @@ import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-par
 import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
 import { formatDate } from '@/lib/format';
 import { useUrlParams } from '@/lib/use-url-params';
+import { decodeMapRecipes } from '@shared/views/map-points';
 
 function median(values: number[]) {
   if (values.length === 0) return null;
@@ -69,10 +70,8 @@ function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; c
 function MapScreen({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
   const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
-  const sizeRatio = useMemo(() => {
-    const column = data.recipes.columns.indexOf('sizeRatio');
-    return median(data.recipes.rows.map((r) => r[column]).filter((v): v is number => typeof v === 'number' && v > 0));
-  }, [data]);
+  const recipeRows = useMemo(() => decodeMapRecipes(data), [data]);
+  const sizeRatio = useMemo(() => median(recipeRows.map((r) => r.sizeRatio).filter((v): v is number => v !== null && v > 0)), [recipeRows]);
   const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
   const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');
   // Every change is applied to the newest parameters (useUrlParams), not to this render's view:
@@ -86,13 +85,11 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
     [setParams, depletion],
   );
   const strongest = useMemo(() => {
-    const b2 = data.recipes.columns.indexOf('reducedB2');
-    const polymer = data.recipes.columns.indexOf('polymerReservoir');
-    const numbers = (column: number) => data.recipes.rows.map((r) => r[column]).filter((v): v is number => typeof v === 'number' && Number.isFinite(v));
-    const b2s = numbers(b2);
-    const polymers = numbers(polymer);
+    const finite = (values: (number | null)[]) => values.filter((v): v is number => v !== null && Number.isFinite(v));
+    const b2s = finite(recipeRows.map((r) => r.reducedB2));
+    const polymers = finite(recipeRows.map((r) => r.polymerReservoir));
     return { reducedB2: b2s.length ? Math.min(...b2s) : null, polymerReservoir: polymers.length ? Math.max(...polymers) : null };
-  }, [data]);
+  }, [recipeRows]);
   const layersKey = [...view.layers].sort().join(',');
   const layers = useMemo(() => view.layers, [layersKey]);
   // With an accepted calibration the map is drawn with it unless the view asks for the theory.

@@ -26,3 +26,22 @@ export function StateBadge({ state, prefix }: { state: ObservedState | null; pre
     </span>
   );
 }
+
+/** A state's glyph and name inline in a sentence. */
+export function StateName({ state }: { state: ObservedState }) {
+  return (
+    <span className="inline-flex items-center gap-1 align-middle text-ink">
+      <StateGlyph state={state} size={9} />
+      {STATE_LABELS[state]}
+    </span>
+  );
+}
+
+/** ✓, ✕ or – before a bench outcome; hidden from screen readers, as the words beside it say the same. */
+export function AgreementTick({ agrees }: { agrees: boolean | null }) {
+  return (
+    <span aria-hidden className={agrees === false ? 'font-semibold text-brick-700' : agrees ? 'text-leaf-700' : ''}>
+      {agrees === true ? '✓' : agrees === false ? '✕' : '–'}
+    </span>
+  );
+}

@@ -46,20 +46,27 @@ export function SymbolText({ text }: { text: string }) {
   );
 }
 
-/** The same inside an SVG <text>: tspans shifted down or up and set smaller. */
+/** How far sub- and superscripts sit from the baseline, in ems of the surrounding text, and their size. */
+const SHIFT_EM = { base: 0, sub: 0.3, sup: -0.45 };
+const SHIFTED_SIZE = 0.75;
+
+/**
+ * The same inside an SVG <text>: each run a tspan moved to its baseline with dy (honoured
+ * wherever an SVG is opened, unlike baseline-shift). dy is in the tspan's own ems, so a smaller
+ * run's move is scaled up to land where the surrounding text's ems say.
+ */
 export function SvgSymbolText({ text }: { text: string }) {
+  let offset = 0;
   return (
     <>
       {symbolParts(text).map((part, i) => {
-        if (part.shift === 'base') return <tspan key={i}>{part.text}</tspan>;
-        // baseline-shift is not honoured everywhere an SVG is opened; dy is, and the next run undoes it.
-        const dy = part.shift === 'sub' ? '0.3em' : '-0.45em';
-        const back = part.shift === 'sub' ? '-0.3em' : '0.45em';
+        const size = part.shift === 'base' ? 1 : SHIFTED_SIZE;
+        const dy = (SHIFT_EM[part.shift] - offset) / size;
+        offset = SHIFT_EM[part.shift];
         return (
-          <Fragment key={i}>
-            <tspan dy={dy} fontSize="75%">{part.text}</tspan>
-            <tspan dy={back}>{'\u200b'}</tspan>
-          </Fragment>
+          <tspan key={i} dy={dy === 0 ? undefined : `${Number(dy.toFixed(3))}em`} fontSize={size === 1 ? undefined : `${size * 100}%`}>
+            {part.text}
+          </tspan>
         );
       })}
     </>

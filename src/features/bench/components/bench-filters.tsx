@@ -1,9 +1,10 @@
 import { useEffect, useRef, useState } from 'react';
-import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES, STATE_LABELS } from '@shared/states';
+import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES } from '@shared/states';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';
 import type { BenchFilterValues } from '../hooks/use-bench-filters';
+import { StateOptions } from '@/components/ui/state-options';
 
 export function BenchFilters({ values, onChange, onClear }: { values: BenchFilterValues; onChange: (patch: Partial<BenchFilterValues>) => void; onClear: () => void }) {
   const any = values.state || values.method || values.disagreeing || values.minAge || values.maxAge;
@@ -14,11 +15,7 @@ export function BenchFilters({ values, onChange, onClear }: { values: BenchFilte
         {(props) => (
           <SelectInput {...props} value={values.state} onChange={(event) => onChange({ state: event.target.value as BenchFilterValues['state'] })}>
             <option value="">Any state</option>
-            {OBSERVED_STATES.map((state) => (
-              <option key={state} value={state}>
-                {STATE_LABELS[state]}
-              </option>
-            ))}
+            <StateOptions states={OBSERVED_STATES} />
           </SelectInput>
         )}
       </Field>

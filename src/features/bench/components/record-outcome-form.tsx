@@ -14,6 +14,7 @@ import { AgreementMark } from './agreement-mark';
 import { AttachmentPanel } from './attachment-panel';
 import { RecipeChooser } from './recipe-chooser';
 import { recordOutcomeSchema, todayLocal, type RecordOutcomeInput, type RecordOutcomeValues } from './record-outcome-schema';
+import { StateOptions } from '@/components/ui/state-options';
 
 const FIELDS = ['recipeId', 'mixedAt', 'ageDays', 'observedState', 'method', 'storageModulusPa', 'yieldStressPa', 'settledHeightPct', 'notes'] as const;
 
@@ -95,11 +96,7 @@ export function RecordOutcomeForm({ programmeId }: { programmeId: number }) {
           {(props) => (
             <SelectInput {...props} {...register('observedState')}>
               <option value="">Choose a state</option>
-              {OBSERVED_STATES.map((s) => (
-                <option key={s} value={s}>
-                  {STATE_LABELS[s]}
-                </option>
-              ))}
+              <StateOptions states={OBSERVED_STATES} />
             </SelectInput>
           )}
         </Field>

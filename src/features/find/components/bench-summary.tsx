@@ -1,7 +1,7 @@
 import { STATE_LABELS, type ObservedState } from '@shared/states';
 import type { ObservationView } from '@shared/views/team-data';
 import { ErrorState, Loading } from '@/components/ui/states';
-import { StateGlyph } from '@/components/ui/state-badge';
+import { AgreementTick, StateName } from '@/components/ui/state-badge';
 import { formatDate, formatNumber } from '@/lib/format';
 import { useRecipeObservations } from '../api/get-recipe-observations';
 
@@ -34,13 +34,7 @@ export function BenchSummary({ recipeId }: { recipeId: number }) {
       <ul className="flex flex-col gap-0.5 text-sm text-ink-soft" aria-label="Bench outcomes">
         {items.map((o) => (
           <li key={o.id}>
-            <span aria-hidden className={o.agrees === false ? 'font-semibold text-brick-700' : o.agrees ? 'text-leaf-700' : ''}>
-              {o.agrees === true ? '✓' : o.agrees === false ? '✕' : '–'}
-            </span>{' '}
-            <span className="inline-flex items-center gap-1 align-middle text-ink">
-              <StateGlyph state={o.observedState} size={9} />
-              {STATE_LABELS[o.observedState]}
-            </span> after {formatNumber(o.ageDays)} days (mixed {formatDate(o.mixedAt)}, {o.method})
+            <AgreementTick agrees={o.agrees} /> <StateName state={o.observedState} /> after {formatNumber(o.ageDays)} days (mixed {formatDate(o.mixedAt)}, {o.method})
             {o.agrees === true ? ', agrees' : o.agrees === false ? ', disagrees' : ', not compared'}
           </li>
         ))}

@@ -8,6 +8,7 @@ import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
 import type { MapView } from '../geometry/map-view';
 import { projectPoints } from '../geometry/project-points';
 import type { MapDrawing, MapPoint } from '../geometry/types';
+import { decodeMapRecipes } from '@shared/views/map-points';
 
 export interface MapRequest {
   view: MapView;
@@ -69,8 +70,7 @@ export function axisTop(model: MapModel, strongest: MapRequest['strongest']): nu
  */
 export function placePoints(map: StateMap, data: MapPoints, filter: { minAge: number | null; maxAge: number | null }): { points: MapPoint[]; skipped: number } {
   const ratioOfRecipe = new Map<number, number | null>();
-  const ratioColumn = data.recipes.columns.indexOf('sizeRatio');
-  for (const row of data.recipes.rows) ratioOfRecipe.set(row[0] as number, row[ratioColumn] as number | null);
+  for (const r of decodeMapRecipes(data)) ratioOfRecipe.set(r.id, r.sizeRatio);
   const cache = new Map<string, number | null>();
   return projectPoints(
     data,

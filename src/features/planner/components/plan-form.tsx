@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { planInputSchema, PLAN_LIMITS, type PlanInput, type PlanRequest } from '@shared/schemas/plans';
-import { GOAL_STATES, STATE_LABELS, type GoalState } from '@shared/states';
+import { GOAL_STATES, type GoalState } from '@shared/states';
 import type { PlanView } from '@shared/views/plan';
 import type { ProgrammeView } from '@shared/views/team-data';
 import { Button } from '@/components/ui/button';
@@ -13,6 +13,8 @@ import { placeServerError } from '@/lib/form-errors';
 import { useCreatePlan } from '../api/create-plan';
 import { usePlanMaterials } from '../api/get-plan-materials';
 import { RANKINGS, rankingOf } from './rankings';
+import { MaterialOptions, describeMaterial } from '@/features/library/components/material-options';
+import { StateOptions } from '@/components/ui/state-options';
 
 const FIELDS = ['title', 'targetState', 'particleId', 'solventId', 'temperatureC', 'attraction.depletantId', 'attraction.saltId', 'attraction.concentrationGL.min', 'attraction.concentrationGL.max', 'attraction.concentrationMM.min', 'attraction.concentrationMM.max', 'phi.min', 'phi.max', 'minMargin', 'candidateCount', 'experimentCount', 'prices.particles', 'prices.solvent', 'prices.depletant', 'prices.salt'] as const;
 
@@ -82,11 +84,7 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
           <Field label="Target state" error={errors.targetState?.message}>
             {(p) => (
               <SelectInput {...p} {...register('targetState')}>
-                {GOAL_STATES.map((s) => (
-                  <option key={s} value={s}>
-                    {STATE_LABELS[s]}
-                  </option>
-                ))}
+                <StateOptions states={GOAL_STATES} />
               </SelectInput>
             )}
           </Field>
@@ -96,22 +94,14 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
           <Field label="Particle system" error={errors.particleId?.message} className="sm:col-span-2">
             {(p) => (
               <SelectInput {...p} disabled={loading} {...register('particleId', num)}>
-                {(particles.data ?? []).map((m) => (
-                  <option key={m.id} value={m.id}>
-                    {m.name} (radius {m.radiusNm} nm)
-                  </option>
-                ))}
+                <MaterialOptions items={particles.data ?? []} describe={describeMaterial.particle} />
               </SelectInput>
             )}
           </Field>
           <Field label="Solvent" error={errors.solventId?.message}>
             {(p) => (
               <SelectInput {...p} disabled={loading} {...register('solventId', num)}>
-                {(solvents.data ?? []).map((m) => (
-                  <option key={m.id} value={m.id}>
-                    {m.name}
-                  </option>
-                ))}
+                <MaterialOptions items={solvents.data ?? []} />
               </SelectInput>
             )}
           </Field>
@@ -135,11 +125,7 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
             <Field label="Polymer (depletant)" error={a.depletantId?.message} className="sm:col-span-2">
               {(p) => (
                 <SelectInput {...p} disabled={loading} {...register('attraction.depletantId', num)}>
-                  {(depletants.data ?? []).map((d) => (
-                    <option key={d.id} value={d.id}>
-                      {d.name}
-                    </option>
-                  ))}
+                  <MaterialOptions items={depletants.data ?? []} />
                 </SelectInput>
               )}
             </Field>
@@ -147,11 +133,7 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
             <Field label="Salt" error={a.saltId?.message} className="sm:col-span-2">
               {(p) => (
                 <SelectInput {...p} disabled={loading} {...register('attraction.saltId', num)}>
-                  {(salts.data ?? []).map((s) => (
-                    <option key={s.id} value={s.id}>
-                      {s.name} (valence {s.valence})
-                    </option>
-                  ))}
+                  <MaterialOptions items={salts.data ?? []} describe={describeMaterial.salt} />
                 </SelectInput>
               )}
             </Field>

@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { programmeInputSchema } from '@shared/schemas/programmes';
-import { ATTRACTION_SOURCES, GOAL_STATES, STATE_LABELS } from '@shared/states';
+import { ATTRACTION_SOURCES, GOAL_STATES } from '@shared/states';
 import type { ProgrammeView } from '@shared/views/team-data';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
@@ -12,6 +12,7 @@ import { Notice } from '@/components/ui/notice';
 import { placeServerError } from '@/lib/form-errors';
 import { useCreateProgramme } from '../api/create-programme';
 import { ATTRACTION_SOURCE_LABELS } from './attraction-source-labels';
+import { StateOptions } from '@/components/ui/state-options';
 
 const FIELDS = ['name', 'goalState', 'attractionSource', 'codePrefix', 'notes'] as const;
 
@@ -44,11 +45,7 @@ export function ProgrammeForm({ onCreated }: { onCreated?: (programme: Programme
       <Field label="Goal state" error={formState.errors.goalState?.message}>
         {(props) => (
           <SelectInput {...props} {...register('goalState')}>
-            {GOAL_STATES.map((state) => (
-              <option key={state} value={state}>
-                {STATE_LABELS[state]}
-              </option>
-            ))}
+            <StateOptions states={GOAL_STATES} />
           </SelectInput>
         )}
       </Field>

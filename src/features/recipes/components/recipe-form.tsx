@@ -12,6 +12,7 @@ import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';
 import { Notice } from '@/components/ui/notice';
 import { placeServerError } from '@/lib/form-errors';
 import { useRecipeMaterials } from '../api/get-materials';
+import { MaterialOptions, describeMaterial } from '@/features/library/components/material-options';
 
 const FIELDS = ['name', 'particleId', 'solventId', 'fraction.kind', 'fraction.value', 'temperatureC', 'attraction', 'attraction.depletantId', 'attraction.concentrationGL', 'attraction.saltId', 'attraction.concentrationMM', 'attraction.contactEnergyKT', 'attraction.rangeSigma', 'notes'] as const;
 
@@ -69,22 +70,14 @@ export function RecipeForm({ initial, submitLabel, onSubmit, renderPreview }: Re
           <Field label="Particle system" error={errors.particleId?.message}>
             {(p) => (
               <SelectInput {...p} disabled={loading} {...register('particleId', num)}>
-                {(particles.data ?? []).map((m) => (
-                  <option key={m.id} value={m.id}>
-                    {m.name} (radius {m.radiusNm} nm)
-                  </option>
-                ))}
+                <MaterialOptions items={particles.data ?? []} describe={describeMaterial.particle} />
               </SelectInput>
             )}
           </Field>
           <Field label="Solvent" error={errors.solventId?.message}>
             {(p) => (
               <SelectInput {...p} disabled={loading} {...register('solventId', num)}>
-                {(solvents.data ?? []).map((m) => (
-                  <option key={m.id} value={m.id}>
-                    {m.name}
-                  </option>
-                ))}
+                <MaterialOptions items={solvents.data ?? []} />
               </SelectInput>
             )}
           </Field>
@@ -156,11 +149,7 @@ function AttractionFields({ control, register, errors, depletants, salts }: { co
         <Field label="Polymer (depletant)" error={e.depletantId?.message}>
           {(p) => (
             <SelectInput {...p} {...register('attraction.depletantId', num)}>
-              {depletants.map((d) => (
-                <option key={d.id} value={d.id}>
-                  {d.name}
-                </option>
-              ))}
+              <MaterialOptions items={depletants} />
             </SelectInput>
           )}
         </Field>
@@ -176,11 +165,7 @@ function AttractionFields({ control, register, errors, depletants, salts }: { co
         <Field label="Salt" error={e.saltId?.message}>
           {(p) => (
             <SelectInput {...p} {...register('attraction.saltId', num)}>
-              {salts.map((s) => (
-                <option key={s.id} value={s.id}>
-                  {s.name} (valence {s.valence})
-                </option>
-              ))}
+              <MaterialOptions items={salts} describe={describeMaterial.salt} />
             </SelectInput>
           )}
         </Field>

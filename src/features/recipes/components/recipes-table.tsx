@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { PREDICTED_STATES, STATE_LABELS, type PredictedState } from '@shared/states';
+import { PREDICTED_STATES, type PredictedState } from '@shared/states';
 import type { RecipeView } from '@shared/views/team-data';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
@@ -10,6 +10,7 @@ import { Table, Td, Th } from '@/components/ui/table';
 import { formatNumber } from '@/lib/format';
 import { useRecipes } from '../api/get-recipes';
 import type { RecipeFilters } from '../api/recipe-keys';
+import { StateOptions } from '@/components/ui/state-options';
 
 type Sort = NonNullable<RecipeFilters['sort']>;
 
@@ -39,11 +40,7 @@ export function RecipesTable({ filters, onChange }: { filters: RecipeFilters; on
           {(props) => (
             <SelectInput {...props} value={filters.state ?? ''} onChange={(e) => onChange({ ...filters, state: (e.target.value || undefined) as PredictedState | undefined, page: 1 })}>
               <option value="">Any</option>
-              {PREDICTED_STATES.map((s) => (
-                <option key={s} value={s}>
-                  {STATE_LABELS[s]}
-                </option>
-              ))}
+              <StateOptions states={PREDICTED_STATES} />
             </SelectInput>
           )}
         </Field>

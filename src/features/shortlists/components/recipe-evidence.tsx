@@ -1,5 +1,4 @@
-import { STATE_LABELS } from '@shared/states';
-import { StateGlyph } from '@/components/ui/state-badge';
+import { AgreementTick, StateName } from '@/components/ui/state-badge';
 import { formatDate, formatNumber } from '@/lib/format';
 import { useRecipeObservations } from '../api/get-recipe-observations';
 
@@ -21,13 +20,7 @@ export function RecipeEvidence({ recipeId, code }: { recipeId: number; code: str
       <ul className="mt-1 flex flex-col gap-0.5" aria-label={`Bench observations of ${code}`}>
         {items.map((o) => (
           <li key={o.id} className="text-ink-soft">
-            <span aria-hidden className={o.agrees === false ? 'font-semibold text-brick-700' : o.agrees ? 'text-leaf-700' : ''}>
-              {o.agrees === true ? '✓' : o.agrees === false ? '✕' : '–'}
-            </span>{' '}
-            <span className="inline-flex items-center gap-1 align-middle text-ink">
-              <StateGlyph state={o.observedState} size={9} />
-              {STATE_LABELS[o.observedState]}
-            </span> at {formatNumber(o.ageDays)} days, mixed {formatDate(o.mixedAt)}
+            <AgreementTick agrees={o.agrees} /> <StateName state={o.observedState} /> at {formatNumber(o.ageDays)} days, mixed {formatDate(o.mixedAt)}
             {o.agrees === true ? ' (agrees)' : o.agrees === false ? ' (disagrees)' : ' (not compared)'}
           </li>
         ))}

@@ -13,6 +13,7 @@ import { placeServerError } from '@/lib/form-errors';
 import { useCreateShortlist } from '../api/create-shortlist';
 import { useReplaceShortlist } from '../api/replace-shortlist';
 import { RecipePicker } from './recipe-picker';
+import { StateOptions } from '@/components/ui/state-options';
 
 type Values = z.input<typeof shortlistInputSchema>;
 type Output = z.output<typeof shortlistInputSchema>;
@@ -74,11 +75,7 @@ export function ShortlistForm({
         <Field label="Target state" error={formState.errors.targetState?.message}>
           {(props) => (
             <SelectInput {...props} {...register('targetState')}>
-              {GOAL_STATES.map((state) => (
-                <option key={state} value={state}>
-                  {STATE_LABELS[state]}
-                </option>
-              ))}
+              <StateOptions states={GOAL_STATES} />
             </SelectInput>
           )}
         </Field>
