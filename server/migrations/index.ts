@@ -4,6 +4,7 @@ import * as m0002 from './0002-team-data';
 import * as m0003 from './0003-calibrations';
 import * as m0004 from './0004-plans';
 import * as m0005 from './0005-programme-change-indexes';
+import * as m0006 from './0006-shortlist-item-snapshots';
 
 export interface Migration {
   name: string;
@@ -18,4 +19,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0003-calibrations', ...m0003 },
   { name: '0005-programme-change-indexes', ...m0005 },
   { name: '0004-plans', ...m0004 },
+  { name: '0006-shortlist-item-snapshots', ...m0006 },
 ];

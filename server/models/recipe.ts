@@ -30,6 +30,8 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
   declare margin: number | null;
   declare modelVersion: string;
   declare derived: RecipeDerived;
+  /** 1 on creation; every edit makes the next version (shortlists keep the one submitted). */
+  declare version: CreationOptional<number>;
   declare archivedAt: CreationOptional<Date | null>;
   declare createdBy: number | null;
   declare updatedBy: number | null;
@@ -64,6 +66,7 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
         margin: num(),
         modelVersion: { type: DataTypes.STRING(40), allowNull: false },
         derived: { type: DataTypes.JSON, allowNull: false },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         archivedAt: { type: DataTypes.DATE(3), allowNull: true },
         createdBy: { type: DataTypes.INTEGER, allowNull: true },
         updatedBy: { type: DataTypes.INTEGER, allowNull: true },

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { GOAL_STATES, SHORTLIST_STATUSES, type GoalState, type ShortlistStatus } from '../../shared/states';
+import type { RecipeSnapshot } from '../../shared/views/team-data';
 
 export class Shortlist extends Model<InferAttributes<Shortlist>, InferCreationAttributes<Shortlist>> {
   declare id: CreationOptional<number>;
@@ -46,6 +47,8 @@ export class ShortlistItem extends Model<InferAttributes<ShortlistItem>, InferCr
   declare recipeId: number;
   declare position: number;
   declare reason: string;
+  /** The recipe version sent for review; null while the shortlist is a draft. */
+  declare snapshot: CreationOptional<RecipeSnapshot | null>;
 
   static initModel(sequelize: Sequelize) {
     ShortlistItem.init(
@@ -55,6 +58,7 @@ export class ShortlistItem extends Model<InferAttributes<ShortlistItem>, InferCr
         recipeId: { type: DataTypes.INTEGER, allowNull: false },
         position: { type: DataTypes.INTEGER, allowNull: false },
         reason: { type: DataTypes.TEXT, allowNull: false },
+        snapshot: { type: DataTypes.JSON, allowNull: true },
       },
       { sequelize, tableName: 'shortlist_items', modelName: 'ShortlistItem', timestamps: false },
     );

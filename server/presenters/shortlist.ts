@@ -1,5 +1,6 @@
 import type { Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
-import type { ShortlistView } from '../../shared/views/team-data';
+import type { ShortlistItemView, ShortlistView } from '../../shared/views/team-data';
+import { differencesSince } from '../services/recipe-snapshots';
 
 type Loaded = Shortlist & {
   items?: (ShortlistItem & { recipe?: Recipe })[];
@@ -27,23 +28,32 @@ export function presentShortlist(s: Loaded): ShortlistView {
     items: (s.items ?? [])
       .slice()
       .sort((a, b) => a.position - b.position)
-      .map((item) => ({
-        recipeId: item.recipeId,
-        position: item.position,
-        reason: item.reason,
-        recipe: {
-          id: item.recipe!.id,
-          code: item.recipe!.code,
-          name: item.recipe!.name,
-          derived: item.recipe!.derived,
-          archived: item.recipe!.archivedAt != null,
-        },
-      })),
+      .map((item) => presentItem(item)),
     history: (s.events ?? [])
       .slice()
       .sort((a, b) => a.id - b.id)
       .map((e) => ({ from: e.fromStatus, to: e.toStatus, actor: person(e.actor), comment: e.comment, at: e.createdAt.toISOString() })),
     createdAt: s.createdAt.toISOString(),
     updatedAt: s.updatedAt.toISOString(),
+  };
+}
+
+/**
+ * Once submitted, an item shows the recipe version that was sent for review (its snapshot);
+ * when the recipe has been edited or re-predicted since, `changed` lists what differs.
+ */
+function presentItem(item: ShortlistItem & { recipe?: Recipe }): ShortlistItemView {
+  const live = item.recipe!;
+  const kept = item.snapshot;
+  const differences = kept ? differencesSince(kept, live) : [];
+  return {
+    recipeId: item.recipeId,
+    position: item.position,
+    reason: item.reason,
+    recipe: kept
+      ? { id: live.id, code: kept.code, name: kept.name, derived: kept.derived, archived: live.archivedAt != null, version: kept.version }
+      : { id: live.id, code: live.code, name: live.name, derived: live.derived, archived: live.archivedAt != null, version: live.version },
+    frozen: kept != null,
+    changed: kept && (live.version !== kept.version || differences.length > 0) ? { currentVersion: live.version, differences } : null,
   };
 }

@@ -1,11 +1,12 @@
 import { Op, Sequelize, type Transaction } from 'sequelize';
 import type { RecipeInput, RecipeListQuery } from '../../shared/schemas/recipes';
-import { badRequest, notFound } from '../errors';
+import { badRequest, conflict, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { Recipe, User } from '../models';
 import { attractionColumns } from '../presenters/recipe';
 import { likePattern, requireProgramme } from './lookups';
 import { deriveForRecipe } from './predictions';
+import { standingShortlistsWith } from './shortlists';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -90,13 +91,22 @@ export async function updateRecipe(ctx: Ctx, id: number, input: RecipeInput) {
   const derived = await deriveForRecipe(input, ctx.transaction);
   recipe.set({ ...inputColumns(input), ...derivedColumns(derived), updatedBy: ctx.user!.id });
   const changed = (recipe.changed() || []).filter((c) => c !== 'derived' && c !== 'updatedBy');
+  // Every edit is a new version; shortlists under review or approved keep the one submitted.
+  recipe.version += 1;
   await recipe.save({ transaction: ctx.transaction });
-  await ctx.audit({ action: 'recipe.updated', entityType: 'recipe', entityId: id, details: { changed, predictedState: derived.predictedState } });
+  await ctx.audit({ action: 'recipe.updated', entityType: 'recipe', entityId: id, details: { changed, version: recipe.version, predictedState: derived.predictedState } });
   return loadRecipe({ id }, ctx.transaction);
 }
 
 export async function setRecipeArchived(ctx: Ctx, id: number, archived: boolean) {
   const recipe = await loadRecipe({ id }, ctx.transaction, true);
+  if (archived && !recipe.archivedAt) {
+    const standing = await standingShortlistsWith(id, ctx.transaction);
+    if (standing.length > 0) {
+      const names = standing.map((s) => `“${s.title}” (${s.status})`).join(', ');
+      throw conflict(`Recipe ${recipe.code} is on ${standing.length === 1 ? 'shortlist' : 'shortlists'} ${names}; it stays on record while ${standing.length === 1 ? 'that shortlist stands' : 'they stand'}. Archive or return the shortlist first.`, { shortlists: standing.map((s) => s.id) });
+    }
+  }
   if ((recipe.archivedAt != null) !== archived) {
     recipe.archivedAt = archived ? new Date() : null;
     await recipe.save({ transaction: ctx.transaction });

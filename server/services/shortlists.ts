@@ -7,6 +7,7 @@ import type { HandlerContext } from '../http/route';
 import { shortlistDecidedMail, shortlistSubmittedMail } from '../mail/shortlist-mails';
 import { Programme, Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
 import { requireProgramme } from './lookups';
+import { snapshotOf } from './recipe-snapshots';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -103,9 +104,8 @@ export async function transitionShortlist(ctx: Ctx, id: number, to: ShortlistSta
     if (!can(actor.role, 'shortlists.decide')) throw forbidden();
     if (to === 'approved' && shortlist.authorId === actor.id) throw forbidden('You cannot approve a shortlist you wrote; another manager must decide');
   }
-  if (to === 'submitted' && (await ShortlistItem.count({ where: { shortlistId: id }, transaction: ctx.transaction })) === 0) {
-    throw conflict('Add at least one recipe before submitting');
-  }
+  if (to === 'submitted') await snapshotItems(id, ctx.transaction);
+  if (to === 'draft') await ShortlistItem.update({ snapshot: null }, { where: { shortlistId: id }, transaction: ctx.transaction });
   shortlist.status = to;
   if (to === 'submitted') {
     shortlist.submittedAt = new Date();
@@ -123,6 +123,32 @@ export async function transitionShortlist(ctx: Ctx, id: number, to: ShortlistSta
   await ctx.audit({ action: `shortlist.${to}`, entityType: 'shortlist', entityId: id, details: { from, to, comment } });
   await queueTransitionMail(ctx, shortlist, to, comment);
   return loadShortlist(id, ctx.transaction);
+}
+
+/**
+ * Freezes each item at the recipe version being submitted (the recipe rows are locked so an
+ * edit racing the submission lands either wholly before or wholly after the snapshot).
+ */
+async function snapshotItems(shortlistId: number, transaction: Transaction | null) {
+  const items = await ShortlistItem.findAll({ where: { shortlistId }, transaction });
+  if (items.length === 0) throw conflict('Add at least one recipe before submitting');
+  const recipes = await Recipe.findAll({ where: { id: { [Op.in]: items.map((i) => i.recipeId) } }, transaction, lock: transaction?.LOCK.UPDATE });
+  const byId = new Map(recipes.map((r) => [r.id, r]));
+  for (const item of items) {
+    const recipe = byId.get(item.recipeId)!;
+    if (recipe.archivedAt) throw conflict(`Recipe ${recipe.code} is archived; take it off the shortlist before submitting`);
+    item.snapshot = snapshotOf(recipe);
+    await item.save({ transaction });
+  }
+}
+
+/** Shortlists under review or approved that hold this recipe (it cannot be archived while they stand). */
+export async function standingShortlistsWith(recipeId: number, transaction: Transaction | null) {
+  return Shortlist.findAll({
+    where: { status: { [Op.in]: ['submitted', 'approved'] }, archivedAt: null },
+    include: [{ model: ShortlistItem, as: 'items', where: { recipeId }, attributes: ['id'] }],
+    transaction,
+  });
 }
 
 async function queueTransitionMail(ctx: Ctx, shortlist: Shortlist, to: ShortlistStatus, comment: string | null) {

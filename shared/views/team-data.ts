@@ -160,11 +160,41 @@ export interface ImportReport {
   batchId?: string;
 }
 
+/**
+ * A recipe version as its shortlist was submitted: composition, derived parameters (prediction,
+ * model version and calibration among them). The shortlist shows this, not later edits.
+ */
+export interface RecipeSnapshot {
+  version: number;
+  code: string;
+  name: string;
+  particleId: number;
+  solventId: number;
+  fraction: { kind: 'mass' | 'volume'; value: number };
+  temperatureC: number;
+  attraction: RecipeAttraction;
+  derived: RecipeDerived;
+  takenAt: string;
+}
+
+/** One field that differs between the submitted version of a recipe and its current one. */
+export interface RecipeDifference {
+  field: string;
+  label: string;
+  before: string | number | null;
+  after: string | number | null;
+}
+
 export interface ShortlistItemView {
   recipeId: number;
   position: number;
   reason: string;
-  recipe: Pick<RecipeView, 'id' | 'code' | 'name' | 'derived' | 'archived'>;
+  /** The version on the shortlist: the submitted one once submitted, the live recipe in a draft. */
+  recipe: Pick<RecipeView, 'id' | 'code' | 'name' | 'derived' | 'archived'> & { version: number };
+  /** True once the shortlist was submitted: `recipe` is then the version sent for review. */
+  frozen: boolean;
+  /** Set when the recipe was edited after submission: its current version and what differs. */
+  changed: { currentVersion: number; differences: RecipeDifference[] } | null;
 }
 export interface ShortlistEventView {
   from: ShortlistStatus | null;

@@ -152,3 +152,59 @@ describe('shortlist workflow', () => {
     expect(mails).toBe(0); // the comment is in the body, not the subject
   });
 });
+
+describe('a submitted or approved shortlist keeps the recipe versions it was given', () => {
+  async function ownRecipe(concentrationGL: number) {
+    const created = await authorAgent.post('/api/recipes').send(recipeInput(programme, lib, { attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL } }));
+    expect(created.status).toBe(201);
+    return created.body.recipe as { id: number; code: string; derived: { reducedB2: number; predictedState: string } };
+  }
+  async function approvedWith(recipeId: number) {
+    const created = await authorAgent.post('/api/shortlists').send({ programmeId: programme.id, title: `Frozen ${Math.random().toString(36).slice(2, 7)}`, targetState: 'gel', items: [{ recipeId, reason: 'the one' }] });
+    await authorAgent.post(`/api/shortlists/${created.body.shortlist.id}/submit`);
+    const approved = await managerAgent.post(`/api/shortlists/${created.body.shortlist.id}/approve`).send({});
+    expect(approved.status).toBe(200);
+    return approved.body.shortlist as { id: number };
+  }
+
+  it('PUT /api/recipes/:id on an approved recipe makes version 2; the shortlist still shows version 1 and says what changed since approval', async () => {
+    const recipe = await ownRecipe(4);
+    const s = await approvedWith(recipe.id);
+    const colleague = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+    const edited = await colleague.put(`/api/recipes/${recipe.id}`).send(recipeInput(programme, lib, { name: 'Reworked', attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 12 } }));
+    expect(edited.status).toBe(200);
+    expect(edited.body.recipe.derived.reducedB2).not.toBe(recipe.derived.reducedB2);
+
+    const detail = await managerAgent.get(`/api/shortlists/${s.id}`);
+    const item = detail.body.shortlist.items[0];
+    expect(item.frozen).toBe(true);
+    expect(item.recipe).toMatchObject({ id: recipe.id, version: 1, derived: { reducedB2: recipe.derived.reducedB2, predictedState: recipe.derived.predictedState } });
+    expect(item.recipe.name).not.toBe('Reworked');
+    expect(item.changed.currentVersion).toBe(2);
+    const fields = item.changed.differences.map((d: { field: string }) => d.field);
+    expect(fields).toEqual(expect.arrayContaining(['name', 'attraction.concentrationGL', 'derived.reducedB2']));
+    expect(item.changed.differences.find((d: { field: string }) => d.field === 'attraction.concentrationGL')).toMatchObject({ before: 4, after: 12 });
+  });
+
+  it('a draft shows the live recipe with nothing marked as changed, and submitting snapshots model and calibration', async () => {
+    const recipe = await ownRecipe(5);
+    const created = await authorAgent.post('/api/shortlists').send({ programmeId: programme.id, title: 'Live draft', targetState: 'gel', items: [{ recipeId: recipe.id, reason: 'x' }] });
+    expect(created.body.shortlist.items[0]).toMatchObject({ frozen: false, changed: null });
+    const submitted = await authorAgent.post(`/api/shortlists/${created.body.shortlist.id}/submit`);
+    expect(submitted.body.shortlist.items[0]).toMatchObject({ frozen: true, changed: null, recipe: { version: 1 } });
+    expect(submitted.body.shortlist.items[0].recipe.derived).toHaveProperty('modelVersion');
+    expect(submitted.body.shortlist.items[0].recipe.derived).toHaveProperty('calibration');
+  });
+
+  it('POST /api/recipes/:id/archive is refused with 409 naming the shortlist while a submitted or approved one holds it', async () => {
+    const recipe = await ownRecipe(6);
+    const s = await approvedWith(recipe.id);
+    const title = (await managerAgent.get(`/api/shortlists/${s.id}`)).body.shortlist.title;
+    const colleague = await signedInAgent(stack.app, await buildUser({ role: 'formulator' }));
+    const archive = await colleague.post(`/api/recipes/${recipe.id}/archive`);
+    expect(archive.status).toBe(409);
+    expect(archive.body.error.message).toContain(title);
+    expect(archive.body.error.message).toMatch(/stays on record/);
+    expect((await managerAgent.get(`/api/recipes/${recipe.id}`)).body.recipe.archived).toBe(false);
+  });
+});

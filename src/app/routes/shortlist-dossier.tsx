@@ -111,10 +111,17 @@ function DossierRecipe({ item }: { item: ShortlistItemView }) {
       <div className="flex items-baseline justify-between gap-3">
         <h3>
           {item.position + 1}. {item.recipe.code} · {item.recipe.name}
+          {item.frozen && <span className="ml-2 text-xs font-normal text-ink-soft">version {item.recipe.version}, as submitted</span>}
         </h3>
         <StateBadge state={d.predictedState} prefix="Predicted" />
       </div>
       <p className="mt-1 text-sm"><span className="text-ink-soft">Why it is here:</span> {item.reason}</p>
+      {item.changed && (
+        <p className="mt-1 text-sm font-medium text-brick-700">
+          The recipe has changed since (now version {item.changed.currentVersion}
+          {item.changed.differences.length > 0 ? `: ${item.changed.differences.map((d) => d.label).join(', ')}` : ''}); this dossier prints the submitted version.
+        </p>
+      )}
       {d.reason && <p className="mt-1 text-sm">{d.reason}</p>}
       {d.nearestBoundary && (
         <p className="mt-1 text-sm text-ink-soft">

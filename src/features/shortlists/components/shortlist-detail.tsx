@@ -81,7 +81,7 @@ export function ShortlistDetail({
 
       <section aria-labelledby="shortlist-recipes" className="flex flex-col gap-3">
         <h2 id="shortlist-recipes">Recipes and evidence ({shortlist.items.length})</h2>
-        <ShortlistItems items={shortlist.items} targetState={shortlist.targetState} />
+        <ShortlistItems items={shortlist.items} targetState={shortlist.targetState} status={shortlist.status} />
       </section>
 
       <section aria-labelledby="shortlist-history" className="flex flex-col gap-3">

@@ -1,7 +1,8 @@
 import { Link } from 'react-router-dom';
-import { STATE_LABELS, type GoalState } from '@shared/states';
-import type { ShortlistItemView } from '@shared/views/team-data';
+import { STATE_LABELS, type GoalState, type ShortlistStatus } from '@shared/states';
+import type { RecipeDifference, ShortlistItemView } from '@shared/views/team-data';
 import { Badge } from '@/components/ui/page';
+import { Notice } from '@/components/ui/notice';
 import { StateBadge } from '@/components/ui/state-badge';
 import { EmptyState } from '@/components/ui/states';
 import { formatNumber } from '@/lib/format';
@@ -9,7 +10,7 @@ import { RecipeEvidence } from './recipe-evidence';
 import { SymbolText } from '@/components/ui/symbol-text';
 
 /** The shortlisted recipes in the author's order: prediction, margin, the author's reason and the bench evidence. */
-export function ShortlistItems({ items, targetState }: { items: ShortlistItemView[]; targetState: GoalState }) {
+export function ShortlistItems({ items, targetState, status }: { items: ShortlistItemView[]; targetState: GoalState; status: ShortlistStatus }) {
   if (items.length === 0) return <EmptyState title="No recipe on this shortlist yet">Its author adds recipes while it is a draft.</EmptyState>;
   return (
     <ol className="flex flex-col gap-3" aria-label="Recipes on the shortlist">
@@ -28,7 +29,9 @@ export function ShortlistItems({ items, targetState }: { items: ShortlistItemVie
                   </Link>
                   <span>{recipe.name}</span>
                   {recipe.archived && <Badge>Archived recipe</Badge>}
+                  {item.frozen && <span className="text-xs text-ink-soft">version {recipe.version} as submitted</span>}
                 </p>
+                {item.changed && <ChangedSince changed={item.changed} status={status} />}
                 <dl className="mt-2 grid grid-cols-[8rem_1fr] gap-x-3 gap-y-1 text-sm">
                   <dt className="text-ink-soft">Predicted state</dt>
                   <dd>
@@ -54,5 +57,26 @@ export function ShortlistItems({ items, targetState }: { items: ShortlistItemVie
         );
       })}
     </ol>
+  );
+}
+
+const show = (value: RecipeDifference['before']) => (value === null ? '—' : typeof value === 'number' ? formatNumber(value, 4) : value);
+
+/** The recipe was edited or re-predicted after submission: the shortlist keeps its version, this says what moved. */
+function ChangedSince({ changed, status }: { changed: NonNullable<ShortlistItemView['changed']>; status: ShortlistStatus }) {
+  const since = status === 'approved' ? 'approval' : 'submission';
+  return (
+    <Notice tone="warning" title={`Changed since ${since}`} className="mt-2">
+      <p>This shortlist keeps the version that was submitted. The recipe is now at version {changed.currentVersion}{changed.differences.length === 0 ? ', with the same values.' : ':'}</p>
+      {changed.differences.length > 0 && (
+        <ul className="mt-1" aria-label="Differences from the submitted version">
+          {changed.differences.map((d) => (
+            <li key={d.field}>
+              <SymbolText text={d.label} />: {show(d.before)} → {show(d.after)}
+            </li>
+          ))}
+        </ul>
+      )}
+    </Notice>
   );
 }
