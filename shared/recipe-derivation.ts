@@ -1,4 +1,5 @@
 import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters, type StateMap } from './physics';
+import { volumeFractionFromMassFraction } from './physics/colloid/volume-fraction-from-mass-fraction';
 import { recipeAttraction } from './physics/recipe/recipe-attraction';
 import { cachedStateMap } from './state-map-cache';
 import type { RecipeInput as PhysicsRecipeInput } from './physics/recipe/recipe-types';
@@ -105,7 +106,9 @@ export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, op
  */
 export function recipeStateMap(recipe: RecipeInput, materials: RecipeMaterials, parameters?: Partial<ClassifierParameters>): StateMap {
   const physics = physicsInputFor(recipe, materials, parameters);
-  const phi = physics.particleVolumeFraction ?? Math.min(0.7, physics.particleMassFraction ?? 0.1);
+  // The map model needs only q (or the theory), but the attraction is checked at the recipe's φ,
+  // so a mass fraction is converted as deriveRecipeParameters does (clamped: that one names a bad φ).
+  const phi = physics.particleVolumeFraction ?? Math.min(0.7, volumeFractionFromMassFraction(physics.particleMassFraction ?? 0.1, physics.particle.densityGPerCm3, physics.solvent.densityGPerCm3));
   const model = recipeAttraction(physics, phi, recipe.temperatureC + 273.15).mapModel;
   return cachedStateMap(model, { parameters, polydispersity: materials.particle.polydispersityPct });
 }

@@ -3,6 +3,7 @@ import { asakuraOosawaReducedB2 } from '../attraction/asakura-oosawa-reduced-b2'
 import { freeVolumeFraction } from '../depletion/free-volume-fraction';
 import { allNumbers } from '../test-support/map-builders';
 import { expectArgumentError, expectRelative } from '../test-support/expect-relative';
+import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { deriveRecipeParameters } from './derive-recipe-parameters';
 import type { RecipeInput } from './recipe-types';
 
@@ -101,6 +102,44 @@ describe('deriveRecipeParameters', () => {
       expect(['fluid', 'gel', 'glass', 'crystal', 'separated']).toContain(derived.predictedState);
       expect(derived.reason.length).toBeGreaterThan(10);
     }
+  });
+
+  it('gives dense depletion recipes a state or an error naming the particle fraction, never a bare pair-energy error', () => {
+    // 30 nm particles with PEG 100 kg/mol (R_g from the PEG fit, q ≈ 0.59), per-solvent 1 and 5 g/L:
+    // the free volume runs out as φ rises, so φ_p^R = φ_p/α(φ) and the contact attraction grow without bound.
+    const outcomes: string[] = [];
+    for (const concentrationGPerL of [1, 5]) {
+      for (const phi of [0.4, 0.45, 0.5, 0.55, 0.6, 0.65]) {
+        const recipe = buildRecipe({
+          particle: { radiusNm: 30, densityGPerCm3: 1.05 }, particleVolumeFraction: phi,
+          depletant: { molarMassKgPerMol: 100, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGPerL, concentrationBasis: 'solvent' },
+        });
+        try {
+          const derived = deriveRecipeParameters(recipe);
+          expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
+          expect(derived.contactEnergyKT!).toBeLessThanOrEqual(600);
+          outcomes.push('state');
+        } catch (error) {
+          expect(error).toBeInstanceOf(PhysicsArgumentError);
+          expect((error as PhysicsArgumentError).argument).toBe('particleVolumeFraction');
+          expect((error as Error).message).toMatch(/^Particle fraction too high for this polymer: .*Use a particle fraction below φ = 0\.\d+/);
+          outcomes.push('fraction');
+        }
+      }
+    }
+    expect(outcomes.slice(0, 3)).toEqual(['state', 'state', 'state']);
+    expect(outcomes.slice(3, 6)).toEqual(['fraction', 'fraction', 'fraction']);
+  });
+
+  it('names the particle fraction, not an infinite φ_p^R, where the free volume underflows (q ≈ 6.7)', () => {
+    const recipe = buildRecipe({
+      particle: { radiusNm: 3, densityGPerCm3: 1.05 }, particleVolumeFraction: 0.5,
+      depletant: { molarMassKgPerMol: 100, radiusOfGyrationNm: 20, concentrationGPerL: 1 },
+    });
+    expect(() => deriveRecipeParameters(recipe)).toThrow(/^Particle fraction too high for this polymer/);
+    const withoutPolymer = deriveRecipeParameters({ ...recipe, depletant: { ...recipe.depletant!, concentrationGPerL: 0 } });
+    expect(withoutPolymer.reservoirPolymerFraction).toBe(0);
+    expect(allNumbers(withoutPolymer).every(Number.isFinite)).toBe(true);
   });
 
   it('rejects missing or out-of-range input, naming the field', () => {

@@ -15,6 +15,7 @@ import { requireFinite } from '../validation/require-finite';
 import { requireInRange } from '../validation/require-in-range';
 import { requirePositive } from '../validation/require-positive';
 import type { RecipeInput } from './recipe-types';
+import { requireDepletionWithinModel } from './require-depletion-within-model';
 
 /** DLVO closest surface separation used unless a recipe gives one (physics.md §2: 0.2–0.5 nm). */
 export const DEFAULT_CLOSEST_APPROACH_NM = 0.4;
@@ -85,23 +86,27 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
     if (basis !== 'sample' && basis !== 'solvent') throw new PhysicsArgumentError('depletant.concentrationBasis', "'sample' or 'solvent'", basis);
     const q = radiusOfGyrationNm / radiusNm;
     const overlap = polymerOverlapConcentration(molarMassGPerMol, radiusOfGyrationNm);
+    // Before φ_p^R = φ_p/α: dense recipes with large coils leave α → 0 and the attraction unbounded.
+    requireDepletionWithinModel({
+      phi, q, radiusNm, radiusOfGyrationNm, concentrationGPerL: concentration, overlapGPerL: overlap, basis,
+      fractionArgument: input.particleMassFraction !== undefined ? 'particleMassFraction (as φ)' : 'particleVolumeFraction',
+    });
     const perSample = basis === 'solvent' ? concentration * (1 - phi) : concentration;
     const systemPolymer = perSample / overlap;
-    const reservoir = systemPolymer / freeVolumeFraction(phi, q);
+    const reservoir = systemPolymer === 0 ? 0 : systemPolymer / freeVolumeFraction(phi, q);
     const contact = -asakuraOosawaContactEnergy(q, reservoir);
     if (systemPolymer > 1) warnings.push(`Polymer above its overlap concentration (c/c* = ${systemPolymer.toFixed(2)}): the ideal-polymer depletion theory is outside its range.`);
     if (reservoir > 1) warnings.push(`Reservoir polymer fraction φ_p^R = ${reservoir.toFixed(2)} above 1: beyond the dilute ideal-polymer assumption of free-volume theory.`);
     if (q > 0.6) warnings.push(`Size ratio q = ${q.toFixed(3)} above 0.6: the Asakura–Oosawa pair potential and free-volume theory are only indicative.`);
-    let b2: number | null = null;
-    if (contact <= 600) b2 = asakuraOosawaReducedB2(q, reservoir);
-    else warnings.push(`Contact attraction ${contact.toFixed(0)} kT beyond 600 kT: B2* cannot be represented (no solution).`);
+    // Representable: requireDepletionWithinModel keeps the contact attraction within 600 kT.
+    const b2 = asakuraOosawaReducedB2(q, reservoir);
     const useFreeVolume = q <= FREE_VOLUME_MAX_Q;
     if (!useFreeVolume) warnings.push(`Size ratio q = ${q.toFixed(2)} beyond free-volume theory's range (q ≤ ${FREE_VOLUME_MAX_Q}); placed on the generic B2* map instead.`);
     if (input.salt) warnings.push('Salt does not enter the depletion attraction here; its Debye length is reported only.');
     return {
       source: 'depletion', warnings,
       mapModel: useFreeVolume ? { kind: 'depletion', q } : genericB2,
-      attraction: useFreeVolume ? { kind: 'depletion', q, polymerReservoir: reservoir } : { kind: 'b2', value: b2 ?? -1e6 },
+      attraction: useFreeVolume ? { kind: 'depletion', q, polymerReservoir: reservoir } : { kind: 'b2', value: b2 },
       b2, contactEnergyKT: contact, rangeSigma: q, q, radiusOfGyrationNm, overlapConcentrationGPerL: overlap,
       systemPolymerFraction: systemPolymer, reservoirPolymerFraction: reservoir, debyeLengthNm,
       closestApproachNm: null, barrierKT: null,

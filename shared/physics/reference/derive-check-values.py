@@ -189,6 +189,19 @@ def dlvo_check():
     return beta_u(hmin), 1 + (x0**3 - 1) - 3*tail, 1/kappa
 
 
+def depletion_recipe_limits():
+    """Contact attraction of depletion recipes near the 600 kT limit (a = 30 nm, R_g = 17.7 nm,
+    M = 100 kg/mol): U = phi_p^R (1 + 3/(2q)), phi_p^R = c_s/(c* alpha(phi)), and the phi or c
+    where U reaches 600 kT."""
+    NA = mpf('6.02214076e23'); q = mpf('17.7')/30
+    cstar = 3*mpf(100000)/(4*pi*NA*(mpf('17.7e-9'))**3)/1000
+    contact = lambda p, c, solvent: c*((1 - p) if solvent else 1)/cstar/alpha(p, q)*(1 + 3/(2*q))
+    phi_max = bisect(lambda p: contact(p, 1, True) - 600, mpf('0.3'), mpf('0.55'))
+    c_max = 600/contact(mpf('0.3'), 1, False)
+    return cstar, contact(mpf('0.55'), 1, True), phi_max, contact(mpf('0.3'), 5000, False), c_max
+
+
 if __name__ == '__main__':
+    print('Depletion recipe limits (c* g/L, U at phi 0.55 1 g/L solvent, phi_max, U at phi 0.3 5000 g/L sample, c_max g/L):', *depletion_recipe_limits())
     print('DLVO (contact beta U, B2*, Debye length m):', *dlvo_check())
     main()
