@@ -6,11 +6,11 @@ import { SESSION_COOKIE, clearSessionCookie, verifySession } from './session-coo
 
 /** One fixed statement: the session lookup runs on every request, so it skips the query builder. */
 const SESSION_USER_SQL =
-  'SELECT id, email, name, role, password_hash, active, last_sign_in_at, invited_by, created_at, updated_at FROM users WHERE id = ?';
+  'SELECT id, email, name, role, password_hash, active, last_sign_in_at, invited_by, session_version, created_at, updated_at FROM users WHERE id = ?';
 
 interface UserRow {
   id: number; email: string; name: string; role: User['role']; password_hash: string | null; active: number | boolean;
-  last_sign_in_at: Date | null; invited_by: number | null; created_at: Date; updated_at: Date;
+  last_sign_in_at: Date | null; invited_by: number | null; session_version: number; created_at: Date; updated_at: Date;
 }
 
 async function userById(id: number): Promise<User | null> {
@@ -19,7 +19,7 @@ async function userById(id: number): Promise<User | null> {
   return User.build(
     {
       id: row.id, email: row.email, name: row.name, role: row.role, passwordHash: row.password_hash, active: Boolean(row.active),
-      lastSignInAt: row.last_sign_in_at, invitedBy: row.invited_by, createdAt: row.created_at, updatedAt: row.updated_at,
+      lastSignInAt: row.last_sign_in_at, invitedBy: row.invited_by, sessionVersion: row.session_version, createdAt: row.created_at, updatedAt: row.updated_at,
     },
     { isNewRecord: false, raw: true },
   );
@@ -28,7 +28,8 @@ async function userById(id: number): Promise<User | null> {
 /**
  * The user behind the request's session cookie, re-read from the database so that a
  * deactivation or a role change takes effect on the next request. Null when there is
- * no valid session; a stale cookie is cleared.
+ * no valid session; a stale cookie is cleared. A token whose session version is not the user's
+ * current one was ended (sign-out, new password, deactivation, role change) and is refused.
  */
 export async function currentUser(config: Config, req: Request, res: Response): Promise<User | null> {
   const token: string | undefined = req.cookies?.[SESSION_COOKIE];
@@ -36,7 +37,7 @@ export async function currentUser(config: Config, req: Request, res: Response): 
   const claims = verifySession(config, token);
   const id = claims ? Number(claims.sub) : NaN;
   const user = Number.isSafeInteger(id) ? await userById(id) : null;
-  if (!user || !user.active) {
+  if (!user || !user.active || claims?.sv !== user.sessionVersion) {
     clearSessionCookie(config, req, res);
     return null;
   }

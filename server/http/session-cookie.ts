@@ -24,10 +24,12 @@ function keyOf(secret: string): KeyObject {
 export interface SessionClaims {
   sub: string;
   role: Role;
+  /** The user's session version when the token was issued. */
+  sv: number | null;
 }
 
-export function signSession(config: Config, user: { id: number; role: Role }): string {
-  return jwt.sign({ role: user.role }, keyOf(config.SESSION_SECRET), {
+export function signSession(config: Config, user: { id: number; role: Role; sessionVersion: number }): string {
+  return jwt.sign({ role: user.role, sv: user.sessionVersion }, keyOf(config.SESSION_SECRET), {
     algorithm: 'HS256',
     subject: String(user.id),
     issuer: ISSUER,
@@ -41,7 +43,7 @@ export function verifySession(config: Config, token: string | undefined): Sessio
   try {
     const claims = jwt.verify(token, keyOf(config.SESSION_SECRET), { algorithms: ALGORITHMS, issuer: ISSUER });
     if (typeof claims === 'string' || typeof claims.sub !== 'string') return null;
-    return { sub: claims.sub, role: claims.role as Role };
+    return { sub: claims.sub, role: claims.role as Role, sv: Number.isSafeInteger(claims.sv) ? (claims.sv as number) : null };
   } catch {
     return null;
   }

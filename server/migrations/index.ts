@@ -5,6 +5,7 @@ import * as m0003 from './0003-calibrations';
 import * as m0004 from './0004-plans';
 import * as m0005 from './0005-programme-change-indexes';
 import * as m0006 from './0006-shortlist-item-snapshots';
+import * as m0007 from './0007-user-session-version';
 
 export interface Migration {
   name: string;
@@ -20,4 +21,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0005-programme-change-indexes', ...m0005 },
   { name: '0004-plans', ...m0004 },
   { name: '0006-shortlist-item-snapshots', ...m0006 },
+  { name: '0007-user-session-version', ...m0007 },
 ];

@@ -10,6 +10,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare active: CreationOptional<boolean>;
   declare lastSignInAt: Date | null;
   declare invitedBy: number | null;
+  /** Carried by every session token; moving it on ends the user's sessions. */
+  declare sessionVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -24,6 +26,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         lastSignInAt: { type: DataTypes.DATE(3), allowNull: true },
         invitedBy: { type: DataTypes.INTEGER, allowNull: true },
+        sessionVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

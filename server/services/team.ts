@@ -9,6 +9,7 @@ import type { HttpError } from '../errors';
 import type { TokenPurpose } from '../models/user-token';
 import { findLiveToken, issueToken } from './one-time-links';
 import { hashPassword } from './passwords';
+import { endSessions } from './sessions';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -78,6 +79,8 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
     await ctx.audit({ action: input.active ? 'user.reactivated' : 'user.deactivated', entityType: 'user', entityId: user.id });
     user.active = input.active;
   }
+  // A new role or a deactivation ends the person's sessions; they sign in again under the new terms.
+  if (user.changed('role') || (user.changed('active') && !user.active)) user.sessionVersion += 1;
   if (input.name && input.name !== user.name) {
     await ctx.audit({ action: 'user.renamed', entityType: 'user', entityId: user.id, details: { from: user.name, to: input.name } });
     user.name = input.name;
@@ -98,7 +101,8 @@ export async function setPasswordThroughLink(
   if (!live || (input.purpose === 'reset' && !live.user.active)) throw input.refusal();
   live.user.passwordHash = await hashPassword(input.password, ctx.deps.config.BCRYPT_COST);
   if (input.purpose === 'invitation') live.user.active = true;
-  await live.user.save({ transaction: ctx.transaction });
+  // Whoever held a session on the old password (or stole one) is signed out.
+  await endSessions(live.user, ctx.transaction);
   live.row.usedAt = new Date();
   await live.row.save({ transaction: ctx.transaction });
   await ctx.audit({ actorId: live.user.id, action: input.action, entityType: 'user', entityId: live.user.id });

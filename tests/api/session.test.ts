@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { AuditEvent, User } from '../../server/models';
 import { bcryptCost } from '../../server/services/passwords';
-import { buildUser, signedInAgent, uniqueEmail } from '../support/builders';
+import { buildUser, latestMailTo, linkIn, signedInAgent, uniqueEmail } from '../support/builders';
 import { hostileSessionCookies } from '../support/session-tokens';
 import { startTestStack, type TestStack } from '../support/test-stack';
 
@@ -127,5 +127,51 @@ describe('GET /api/session and DELETE /api/session', () => {
     const agent = await signedInAgent(stack.app, who);
     await User.update({ active: false }, { where: { id: who.user.id } });
     expect((await agent.get('/api/session')).body.user).toBeNull();
+  });
+});
+
+describe('ending sessions', () => {
+  const sessionCookie = (response: request.Response) => String(response.headers['set-cookie']).split(';')[0];
+
+  it('DELETE /api/session ends every session of the user: a copied cookie and a second browser are refused afterwards', async () => {
+    const who = await buildUser({ role: 'formulator' });
+    const first = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+    const copied = sessionCookie(first);
+    const elsewhere = await signedInAgent(stack.app, who);
+    expect((await request(stack.app).delete('/api/session').set('Cookie', copied)).status).toBe(204);
+    expect((await request(stack.app).get('/api/session').set('Cookie', copied)).body.user).toBeNull();
+    expect((await request(stack.app).get('/api/recipes').set('Cookie', copied)).status).toBe(401);
+    expect((await elsewhere.get('/api/session')).body.user).toBeNull();
+    // Signing in again works.
+    expect((await (await signedInAgent(stack.app, who)).get('/api/session')).body.user.id).toBe(who.user.id);
+  });
+
+  it('POST /api/password-resets/confirm ends the sessions opened with the old password', async () => {
+    const who = await buildUser({ role: 'scientist' });
+    const before = await signedInAgent(stack.app, who);
+    await request(stack.app).post('/api/password-resets').send({ email: who.email });
+    await vi.waitFor(async () => expect(await latestMailTo(who.email)).not.toBeNull(), { timeout: 5000 });
+    const token = linkIn((await latestMailTo(who.email))!.textBody, '/reset-password').searchParams.get('token')!;
+    expect((await request(stack.app).post('/api/password-resets/confirm').send({ token, password: 'a-fresh-password-7' })).status).toBe(200);
+    expect((await before.get('/api/session')).body.user).toBeNull();
+  });
+
+  it('PATCH /api/users/:id ends the sessions of a person whose role changes or who is deactivated (and reactivation does not revive them)', async () => {
+    const admin = await signedInAgent(stack.app, await buildUser({ role: 'admin' }));
+    const promoted = await buildUser({ role: 'formulator' });
+    const promotedAgent = await signedInAgent(stack.app, promoted);
+    expect((await admin.patch(`/api/users/${promoted.user.id}`).send({ role: 'viewer' })).status).toBe(200);
+    expect((await promotedAgent.get('/api/session')).body.user).toBeNull();
+
+    const paused = await buildUser({ role: 'scientist' });
+    const pausedAgent = await signedInAgent(stack.app, paused);
+    expect((await admin.patch(`/api/users/${paused.user.id}`).send({ active: false })).status).toBe(200);
+    expect((await admin.patch(`/api/users/${paused.user.id}`).send({ active: true })).status).toBe(200);
+    expect((await pausedAgent.get('/api/session')).body.user).toBeNull();
+
+    const renamed = await buildUser({ role: 'viewer' });
+    const renamedAgent = await signedInAgent(stack.app, renamed);
+    expect((await admin.patch(`/api/users/${renamed.user.id}`).send({ name: 'A New Name' })).status).toBe(200);
+    expect((await renamedAgent.get('/api/session')).body.user?.id).toBe(renamed.user.id);
   });
 });

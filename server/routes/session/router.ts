@@ -6,6 +6,7 @@ import { User } from '../../models';
 import { presentUser } from '../../presenters/user';
 import { passwordMatches } from '../../services/passwords';
 import { recordAudit } from '../../services/audit';
+import { signOut } from '../../services/sessions';
 
 const WRONG = () => new HttpError(401, 'sign_in_failed', 'E-mail or password is wrong');
 
@@ -55,9 +56,12 @@ export const sessionRoutes = [
     method: 'delete',
     path: '/api/session',
     access: 'public',
-    summary: 'Sign out (clears the session cookie)',
-    async handler({ user, deps, req, res, audit }) {
-      if (user) await audit({ action: 'session.signed_out', entityType: 'user', entityId: user.id });
+    summary: 'Sign out (clears the session cookie and ends every session of the user)',
+    async handler({ user, deps, req, res, audit, transaction }) {
+      if (user) {
+        await signOut(user.id, transaction);
+        await audit({ action: 'session.signed_out', entityType: 'user', entityId: user.id });
+      }
       clearSessionCookie(deps.config, req, res);
       return { status: 204 };
     },
