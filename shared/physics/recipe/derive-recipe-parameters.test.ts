@@ -142,6 +142,14 @@ describe('deriveRecipeParameters', () => {
     expect(allNumbers(withoutPolymer).every(Number.isFinite)).toBe(true);
   });
 
+  it('screens a 2 M 3:3 salt (ionic strength 18 mol/L) as at 10 mol/L, with a warning, instead of failing', () => {
+    const derived = deriveRecipeParameters(buildRecipe({ salt: { concentrationMM: 2000, valence: 3 } }));
+    // κ⁻¹ = 0.304 nm/√(I/M) at 25 °C (physics.md §6, derived), taken at the 10 mol/L cap.
+    expectRelative(derived.debyeLengthNm!, 0.304011912660618 / Math.sqrt(10), 1e-12);
+    expect(derived.warnings.some((warning) => warning.includes('Ionic strength 18 mol/L'))).toBe(true);
+    expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
+  });
+
   it('rejects missing or out-of-range input, naming the field', () => {
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 0, densityGPerCm3: 1 } })), 'particle.radiusNm');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleMassFraction: 0.2 })), 'particleMassFraction');

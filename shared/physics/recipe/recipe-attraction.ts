@@ -49,7 +49,7 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
   if (theory !== 'meanField' && theory !== 'baxterPY') throw new PhysicsArgumentError('theory', "'meanField' or 'baxterPY'", theory);
   const genericB2: MapModel = { kind: 'generic', theory, axis: 'b2' };
   const radiusNm = input.particle.radiusNm;
-  const debyeLengthNm = input.salt ? saltDebyeLengthNm(input, temperature) : null;
+  const debyeLengthNm = input.salt ? saltDebyeLengthNm(input, temperature, warnings) : null;
   const empty = {
     q: null, radiusOfGyrationNm: null, overlapConcentrationGPerL: null, systemPolymerFraction: null,
     reservoirPolymerFraction: null, debyeLengthNm, closestApproachNm: null, barrierKT: null,
@@ -143,9 +143,21 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
   return { ...empty, source: 'none', warnings, mapModel: genericB2, attraction: { kind: 'b2', value: 1 }, b2: 1, contactEnergyKT: 0, rangeSigma: 0 };
 }
 
-function saltDebyeLengthNm(input: RecipeInput, temperature: number): number {
+/**
+ * Highest ionic strength (mol/L) at which the Debye length is evaluated. A 2 M 3:3 salt reaches
+ * 18 mol/L; long before that the double layer is screened within a fraction of the 0.2–0.5 nm
+ * closest approach (0.096 nm at 10 mol/L), so screening as at 10 mol/L leaves van der Waals alone,
+ * which is what the formula at the true ionic strength would give too.
+ */
+const SCREENING_IONIC_STRENGTH_CAP = 10;
+
+function saltDebyeLengthNm(input: RecipeInput, temperature: number, warnings: string[]): number {
   const salt = input.salt!;
   const concentration = requireInRange('salt.concentrationMM', salt.concentrationMM, 0, 1e4, { what: 'a salt concentration in mM', highEnd: 'closed' });
   const ionicStrength = symmetricSaltIonicStrength(concentration / 1000, salt.valence);
-  return debyeLength(ionicStrength, temperature, input.solvent.relativePermittivity ?? WATER_RELATIVE_PERMITTIVITY) * 1e9;
+  if (ionicStrength > SCREENING_IONIC_STRENGTH_CAP) {
+    warnings.push(`Ionic strength ${Number(ionicStrength.toPrecision(3))} mol/L is far beyond Debye–Hückel screening; the double layer is taken as screened as at ${SCREENING_IONIC_STRENGTH_CAP} mol/L (negligible next to van der Waals).`);
+  }
+  const screening = Math.min(ionicStrength, SCREENING_IONIC_STRENGTH_CAP);
+  return debyeLength(screening, temperature, input.solvent.relativePermittivity ?? WATER_RELATIVE_PERMITTIVITY) * 1e9;
 }
