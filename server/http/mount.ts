@@ -59,6 +59,7 @@ function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
       const query = spec.query ? parseOrThrow(spec.query, req.query, 'query') : undefined;
       const body = spec.body && !spec.upload ? parseJsonBody(spec, req) : spec.upload ? req.body : undefined;
       const tasks: (() => Promise<void>)[] = [];
+      const replyTasks: (() => Promise<void>)[] = [];
       const ctx: HandlerContext<unknown, unknown, unknown> = {
         req,
         res,
@@ -72,6 +73,7 @@ function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
         audit: (event) =>
           recordAudit({ actorId: ctx.user?.id ?? null, ip: ctx.ip, ...event }, ctx.transaction ?? undefined),
         afterCommit: (task) => void tasks.push(task),
+        afterReply: (task) => void replyTasks.push(task),
       };
       const reply = transactional
         ? await deps.sequelize.transaction(async (transaction) => {
@@ -86,10 +88,19 @@ function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
         await task().catch((error: Error) => console.warn(`after-commit task failed: ${error.message}`));
       }
       if (reply && !res.headersSent) res.status(reply.status ?? 200).json(reply.body ?? null);
+      runAfterReply(replyTasks);
     } catch (error) {
       next(error);
     }
   };
+}
+
+/** Started once the reply is on its way; a failure is logged, the committed write stands. */
+function runAfterReply(tasks: (() => Promise<void>)[]) {
+  if (tasks.length === 0) return;
+  setImmediate(async () => {
+    for (const task of tasks) await task().catch((error: Error) => console.warn(`after-reply task failed: ${error.message}`));
+  });
 }
 
 function parseJsonBody(spec: RouteSpec, req: Request) {

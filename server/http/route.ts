@@ -34,6 +34,11 @@ export interface HandlerContext<B, Q, P> {
   audit: (event: Omit<AuditInput, 'actorId' | 'ip'> & { actorId?: number | null }) => Promise<void>;
   /** Work to do once the transaction has committed (e.g. send mail); awaited before replying. */
   afterCommit: (task: () => Promise<void>) => void;
+  /**
+   * Work to start once the reply has gone out (after the commit). For side effects whose cost
+   * must not show in the response time, such as a reset mail that would reveal a known address.
+   */
+  afterReply: (task: () => Promise<void>) => void;
 }
 
 export interface Reply {

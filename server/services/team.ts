@@ -52,7 +52,8 @@ export async function requestPasswordReset(ctx: Ctx, email: string): Promise<voi
   if (!user) return;
   const token = await issueToken({ userId: user.id, purpose: 'reset', lifetimeMs: LIMITS.resetMinutes * 60_000, createdBy: null }, ctx.transaction);
   const mail = passwordResetMail({ to: user.email, name: user.name, link: link(ctx, '/reset-password', token) });
-  ctx.afterCommit(() => ctx.deps.mailer.send(mail));
+  // Sent after the reply, so a known address answers as fast as an unknown one.
+  ctx.afterReply(() => ctx.deps.mailer.send(mail));
 }
 
 /**

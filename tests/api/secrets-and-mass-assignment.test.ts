@@ -1,7 +1,7 @@
 import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
 import request from 'supertest';
 import { Observation, Programme, Recipe, Shortlist, User } from '../../server/models';
-import { buildUser, latestMailTo, linkIn, signedInAgent, uniqueEmail } from '../support/builders';
+import { buildUser, latestMailTo, linkIn, mailArrivingFor, signedInAgent, uniqueEmail } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
 import { tableCounts } from '../support/table-counts';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -37,7 +37,7 @@ describe('secrets never leave the server', () => {
     keep(await request(stack.app).post('/api/invitations/accept').send({ token: invitationToken, password: 'sam-secret-password' }));
     keep(await request(stack.app).post('/api/session').send({ email, password: 'sam-secret-password' }));
     keep(await request(stack.app).post('/api/password-resets').send({ email }));
-    const resetToken = linkIn((await latestMailTo(email))!.textBody, '/reset-password').searchParams.get('token')!;
+    const resetToken = linkIn((await mailArrivingFor(email, /^Reset/)).textBody, '/reset-password').searchParams.get('token')!;
     keep(await adminAgent.get('/api/users?pageSize=200'));
     keep(await adminAgent.get('/api/audit-events?pageSize=200'));
     const outbox = keep(await adminAgent.get(`/api/outbox?to=${encodeURIComponent(email)}`));

@@ -1,8 +1,8 @@
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { AuditEvent, User } from '../../server/models';
 import { bcryptCost } from '../../server/services/passwords';
-import { buildUser, latestMailTo, linkIn, signedInAgent, uniqueEmail } from '../support/builders';
+import { buildUser, linkIn, mailArrivingFor, signedInAgent, uniqueEmail } from '../support/builders';
 import { hostileSessionCookies } from '../support/session-tokens';
 import { startTestStack, type TestStack } from '../support/test-stack';
 
@@ -150,8 +150,7 @@ describe('ending sessions', () => {
     const who = await buildUser({ role: 'scientist' });
     const before = await signedInAgent(stack.app, who);
     await request(stack.app).post('/api/password-resets').send({ email: who.email });
-    await vi.waitFor(async () => expect(await latestMailTo(who.email)).not.toBeNull(), { timeout: 5000 });
-    const token = linkIn((await latestMailTo(who.email))!.textBody, '/reset-password').searchParams.get('token')!;
+    const token = linkIn((await mailArrivingFor(who.email)).textBody, '/reset-password').searchParams.get('token')!;
     expect((await request(stack.app).post('/api/password-resets/confirm').send({ token, password: 'a-fresh-password-7' })).status).toBe(200);
     expect((await before.get('/api/session')).body.user).toBeNull();
   });

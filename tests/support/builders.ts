@@ -63,6 +63,20 @@ export async function latestMailTo(email: string) {
   return OutboxMessage.findOne({ where: { recipients: { [Op.like]: `%${email}%` } }, order: [['id', 'DESC']] });
 }
 
+/**
+ * The newest message to this e-mail once one has arrived (mail sent after the reply, such as a
+ * password reset, lands a moment after the answer); throws after `timeoutMs`.
+ */
+export async function mailArrivingFor(email: string, subject: RegExp = /./, timeoutMs = 5000) {
+  const until = Date.now() + timeoutMs;
+  for (;;) {
+    const mail = await latestMailTo(email);
+    if (mail && subject.test(mail.subject ?? '')) return mail;
+    if (Date.now() > until) throw new Error(`no mail reached ${email} within ${timeoutMs} ms`);
+    await new Promise((done) => setTimeout(done, 25));
+  }
+}
+
 /** The one-time link in a message body, or throws. */
 export function linkIn(text: string | null, path: string): URL {
   const match = new RegExp(`https?://\\S+${path.replace('/', '\\/')}\\?token=[\\w-]+`).exec(text ?? '');
