@@ -31,6 +31,15 @@ export async function issueToken(
   return token;
 }
 
+/** Spends every unused link of this purpose for the user; returns how many were live. */
+export async function revokeTokens(userId: number, purpose: TokenPurpose, transaction: Transaction | null): Promise<number> {
+  const [count] = await UserToken.update(
+    { usedAt: new Date() },
+    { where: { userId, purpose, usedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction },
+  );
+  return count;
+}
+
 /** The live token row and its user, locked for the transaction, or null if unknown, used or expired. */
 export async function findLiveToken(token: string, purpose: TokenPurpose, transaction: Transaction | null) {
   const row = await UserToken.findOne({

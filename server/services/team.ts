@@ -7,7 +7,7 @@ import { invitationMail, passwordResetMail } from '../mail/templates';
 import { User } from '../models';
 import type { HttpError } from '../errors';
 import type { TokenPurpose } from '../models/user-token';
-import { findLiveToken, issueToken } from './one-time-links';
+import { findLiveToken, issueToken, revokeTokens } from './one-time-links';
 import { hashPassword } from './passwords';
 import { endSessions } from './sessions';
 
@@ -74,6 +74,11 @@ export async function updateUser(ctx: Ctx, id: number, input: UpdateUserInput): 
   if (input.role && input.role !== user.role) {
     await ctx.audit({ action: 'user.role_changed', entityType: 'user', entityId: user.id, details: { from: user.role, to: input.role } });
     user.role = input.role;
+  }
+  if (input.active === false && user.passwordHash === null) {
+    // A pending invitee is inactive already: deactivating them withdraws the invitation link.
+    const revoked = await revokeTokens(user.id, 'invitation', transaction);
+    if (revoked > 0) await ctx.audit({ action: 'invitation.revoked', entityType: 'user', entityId: user.id });
   }
   if (input.active !== undefined && input.active !== user.active) {
     if (input.active && user.passwordHash === null) throw conflict('This person has not accepted the invitation yet', { field: 'active' });

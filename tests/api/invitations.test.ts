@@ -41,6 +41,22 @@ describe('invitations', () => {
     expect(await AuditEvent.count({ where: { action: 'invitation.accepted', entityId: String(invited.body.user.id) } })).toBe(1);
   });
 
+  it('PATCH /api/users/:id with active: false withdraws a pending invitation: the link no longer greets, accepts or activates', async () => {
+    const email = uniqueEmail('withdrawn');
+    const invited = await admin.post('/api/invitations').send({ email, name: 'Wendell Withdrawn', role: 'manager' });
+    const token = linkIn((await latestMailTo(email))!.textBody, '/accept-invitation').searchParams.get('token')!;
+    const revoked = await admin.patch(`/api/users/${invited.body.user.id}`).send({ active: false });
+    expect(revoked.status).toBe(200);
+    expect((await request(stack.app).get(`/api/invitations/${token}`)).status).toBe(400);
+    const accept = await request(stack.app).post('/api/invitations/accept').send({ token, password: 'a-sneaky-long-password' });
+    expect(accept.status).toBe(400);
+    expect(accept.body.error.field).toBe('token');
+    const stored = await User.findByPk(invited.body.user.id);
+    expect(stored).toMatchObject({ active: false, passwordHash: null });
+    expect((await request(stack.app).post('/api/session').send({ email, password: 'a-sneaky-long-password' })).status).toBe(401);
+    expect(await AuditEvent.count({ where: { action: 'invitation.revoked', entityId: String(invited.body.user.id) } })).toBe(1);
+  });
+
   it('a link works once', async () => {
     const email = uniqueEmail('once');
     await admin.post('/api/invitations').send({ email, name: 'Once Only', role: 'viewer' });
