@@ -5,13 +5,25 @@ import { baxterDiscriminantNumerator, baxterLambdaUnchecked } from './baxter-py-
 import { baxterPressureUnchecked } from './baxter-py-pressure';
 
 /**
- * Below this φ the adhesive part is integrated numerically: the closed form's terms cancel there,
- * with a relative rounding error measured as ≈ 3e-15·τ⁴/φ², so the switch at min(0.02, 0.06τ²)
- * keeps it below ~1e-12.
+ * Below this φ the adhesive part is integrated numerically: the closed form's terms (of order
+ * τ³/φ) cancel to a result of order 1/τ, with a relative rounding error measured as
+ * ≈ 3e-15·τ⁴/φ², so the switch at 0.06τ² keeps it below ~1e-12. Above τ ≈ 4 that is every φ:
+ * the stiff, nearly hard-sphere fluid is always integrated, and stays exact up to τ = 1e300.
  */
 function quadratureBelow(tau: number): number {
-  return Math.min(0.02, 0.06 * tau * tau);
+  return 0.06 * tau * tau;
 }
+
+/** Baxter's critical stickiness τ_c = (2 − √2)/6, where N(φ) is a perfect square. */
+const CRITICAL_STICKINESS = (2 - Math.SQRT2) / 6;
+
+/**
+ * Relative half-width of the bridge around τ_c. At τ_c the closed form's logarithms meet a
+ * double root and cancel catastrophically (about 1e-15/|τ/τ_c − 1| kT; at τ_c itself it is off by
+ * ~0.8 kT); within the bridge βμ is interpolated linearly in τ between its edges, where the
+ * closed form is good to ~1e-9 and the interpolation to ~1e-6 kT.
+ */
+const CRITICAL_BRIDGE = 1e-6;
 
 /**
  * Chemical potential βμ of Baxter adhesive spheres, Percus–Yevick compressibility route
@@ -21,8 +33,11 @@ function quadratureBelow(tau: number): number {
  * (λ involves √N with N quadratic in φ): with s = √N, b₀ = 2τ(1−τ) − 1/3, b₁ = 4/3 − 2τ,
  * K(φ) = (R₀ + sR₁)/(φ(1−φ)²) + α ln|2τs + 2τ² + b₀φ| − α ln(1−φ) ± β ln|(1 + b₁(φ−1) ∓ √2 s)/(φ−1)|,
  * α = 12τ(6τ − 1), β = √2(54τ² − 12τ + 1), R₀, R₁ quadratics in φ (see code). It is the
- * analytic continuation used for the liquid across the no-solution band. For φ < min(0.02, 0.06τ²)
- * the integral is taken by adaptive Gauss–Kronrod quadrature instead (relative tolerance 1e-13).
+ * analytic continuation used for the liquid across the no-solution band. For φ < 0.06τ² (so for
+ * every φ once τ ≳ 4, where the closed form's terms cancel) the integral is taken by adaptive
+ * Gauss–Kronrod quadrature instead (relative tolerance 1e-13), which tends to the hard-sphere
+ * limit as τ → ∞; within 1e-6 (relative) of τ_c it is interpolated across, where the closed form
+ * degenerates.
  *
  * Source: R. J. Baxter, J. Chem. Phys. 49, 2770 (1968) (λ, compressibility); the closed form is
  * checked in the tests against quadrature and against dβμ/dφ = (dp̃/dφ)/φ.
@@ -44,15 +59,31 @@ export function baxterChemicalPotentialUnchecked(phi: number, tau: number): numb
   const pressure = baxterPressureUnchecked(phi, tau);
   if (pressure === null) return null;
   const hardSphereExcess = -Math.log1p(-phi) + (3 * phi * (2 - phi)) / (2 * (1 - phi) ** 2);
-  const adhesiveExcess = phi < quadratureBelow(tau) ? adhesiveIntegralByQuadrature(phi, tau) : adhesiveIntegralClosedForm(phi, tau);
-  return Math.log(phi) + hardSphereExcess + adhesiveExcess + pressure / phi - 1;
+  return Math.log(phi) + hardSphereExcess + adhesiveExcess(phi, tau) + pressure / phi - 1;
+}
+
+/** ∫₀^φ of the adhesive integrand, by the form that is accurate at (φ, τ) (internal). */
+function adhesiveExcess(phi: number, tau: number): number {
+  const offset = tau / CRITICAL_STICKINESS - 1;
+  if (Math.abs(offset) < CRITICAL_BRIDGE) {
+    const below = adhesiveExcessAwayFromCritical(phi, CRITICAL_STICKINESS * (1 - CRITICAL_BRIDGE));
+    const above = adhesiveExcessAwayFromCritical(phi, CRITICAL_STICKINESS * (1 + CRITICAL_BRIDGE));
+    const weight = (offset + CRITICAL_BRIDGE) / (2 * CRITICAL_BRIDGE);
+    return below + weight * (above - below);
+  }
+  return adhesiveExcessAwayFromCritical(phi, tau);
+}
+
+function adhesiveExcessAwayFromCritical(phi: number, tau: number): number {
+  return phi < quadratureBelow(tau) ? adhesiveIntegralByQuadrature(phi, tau) : adhesiveIntegralClosedForm(phi, tau);
 }
 
 /** The integrand −(τ + x/(1−x))λ² + xλ³/9 of the adhesive free energy (internal). */
 export function adhesiveIntegrand(x: number, tau: number): number {
   const lambda = baxterLambdaUnchecked(x, tau);
   if (lambda === null) return NaN;
-  return -(tau + x / (1 - x)) * lambda * lambda + (x * lambda ** 3) / 9;
+  // (τλ)·λ rather than τ·λ²: for τ near 1e300, λ ≈ 1/τ and λ² would underflow.
+  return -(tau * lambda + (x / (1 - x)) * lambda) * lambda + (x * lambda ** 3) / 9;
 }
 
 function adhesiveIntegralByQuadrature(phi: number, tau: number): number {

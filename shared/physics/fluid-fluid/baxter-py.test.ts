@@ -101,6 +101,42 @@ describe('Baxter adhesive spheres in the Percus–Yevick approximation', () => {
     expectRelative(baxterPYChemicalPotential(0.2, tau)!, Math.log(0.2) + integral, 1e-11);
   });
 
+  it('baxterPYChemicalPotential tends to the Percus–Yevick hard-sphere value as τ → ∞, without cancellation', () => {
+    // PY compressibility route for hard spheres, Z = (1 + φ + φ²)/(1 − φ)³ (Thiele, J. Chem. Phys.
+    // 39, 474 (1963); Wertheim, Phys. Rev. Lett. 10, 321 (1963): published), integrated in closed
+    // form: βμ = ln φ − ln(1 − φ) + (14φ − 13φ² + 5φ³)/(2(1 − φ)³) (derived; e.g. Hansen &
+    // McDonald, Theory of Simple Liquids, from memory). At φ = 0.5 it is exactly 17.5.
+    const hardSphere = (phi: number) => Math.log(phi) - Math.log1p(-phi) + (14 * phi - 13 * phi ** 2 + 5 * phi ** 3) / (2 * (1 - phi) ** 3);
+    expect(hardSphere(0.5)).toBeCloseTo(17.5, 13);
+    for (const phi of [0.05, 0.3, 0.5, 0.7]) {
+      expectRelative(baxterPYChemicalPotential(phi, 1e300)!, hardSphere(phi), 1e-13);
+      expectRelative(baxterPYChemicalPotential(phi, 1e12)!, hardSphere(phi), 1e-10);
+      // The approach is from below and of order 1/τ (stickiness only lowers βμ).
+      const gap = hardSphere(phi) - baxterPYChemicalPotential(phi, 1e4)!;
+      expect(gap).toBeGreaterThan(0);
+      expectRelative(10 * (hardSphere(phi) - baxterPYChemicalPotential(phi, 1e5)!), gap, 1e-3);
+    }
+    // mpmath quadrature of the compressibility (derived, reference/derive-check-values.py):
+    // βμ(0.3, 1e4) = 3.76616321689440, βμ(0.5, 1e5) = 17.4998425014562.
+    expectRelative(baxterPYChemicalPotential(0.3, 1e4)!, 3.7661632168944, 1e-12);
+    expectRelative(baxterPYChemicalPotential(0.5, 1e5)!, 17.4998425014562, 1e-12);
+  });
+
+  it('baxterPYChemicalPotential is continuous across the critical stickiness τ_c = (2 − √2)/6', () => {
+    const criticalTau = (2 - Math.SQRT2) / 6;
+    for (const phi of [0.05, 0.3, 0.5]) {
+      const at = baxterPYChemicalPotential(phi, criticalTau)!;
+      for (const relative of [1e-12, 1e-9, 1e-7, 2e-6]) {
+        expect(Math.abs(baxterPYChemicalPotential(phi, criticalTau * (1 + relative))! - at)).toBeLessThan(1e-5);
+        expect(Math.abs(baxterPYChemicalPotential(phi, criticalTau * (1 - relative))! - at)).toBeLessThan(1e-5);
+      }
+    }
+    // mpmath (derived, reference/derive-check-values.py): βμ(0.05, τ_c) = −3.59905057686514 by
+    // quadrature, βμ(0.3, τ_c) = −3.38478006780687 from the closed form just above τ_c.
+    expectRelative(baxterPYChemicalPotential(0.05, criticalTau)!, -3.59905057686514, 1e-9);
+    expectRelative(baxterPYChemicalPotential(0.3, criticalTau)!, -3.38478006780687, 1e-9);
+  });
+
   it('baxterPYBinodal satisfies equal pressure and chemical potential and brackets the no-solution band', () => {
     for (const tau of [0.0975, 0.09, 0.07, 0.05, 0.03]) {
       const pair = baxterPYBinodal(tau)!;

@@ -202,6 +202,9 @@ def depletion_recipe_limits():
 
 
 if __name__ == '__main__':
+    tc = (2 - sqrt(2))/6
+    print('PY beta mu near hard spheres (0.3, 1e4), (0.5, 1e5):', py_mu_by_quadrature(mpf('0.3'), mpf('1e4')), py_mu_by_quadrature(mpf('0.5'), mpf('1e5')))
+    print('PY beta mu at tau_c: (0.05) quadrature, (0.3) closed form just above:', py_mu_by_quadrature(mpf('0.05'), tc), py_mu_closed(mpf('0.3'), tc*(1 + mpf('1e-20'))))
     print('Depletion recipe limits (c* g/L, U at phi 0.55 1 g/L solvent, phi_max, U at phi 0.3 5000 g/L sample, c_max g/L):', *depletion_recipe_limits())
     print('DLVO (contact beta U, B2*, Debye length m):', *dlvo_check())
     main()
