@@ -25,6 +25,20 @@ describe('reducedB2FromPotential (Mayer-function quadrature)', () => {
     expectRelative(reducedB2FromPotential(betaU, 1.5, { breakpoints: [1.2] }), expected, 1e-11);
   });
 
+  it('finds a narrow deep well at contact without breakpoints', () => {
+    // Square-well closed form B2* = 1 − (λ³ − 1)(e^U − 1) (physics.md §2, standard result; e^600 ≈ 3.8e260
+    // is finite in double precision), for a well much narrower than the interaction range.
+    for (const [depth, lambda, xMax] of [[600, 1.01, 1.5], [600, 1.001, 1.5], [100, 1.001, 3], [30, 1.0001, 2], [5, 1.001, 1.5]]) {
+      const betaU = (x: number) => (x < lambda ? -depth : 0);
+      expectRelative(reducedB2FromPotential(betaU, xMax), 1 - (lambda ** 3 - 1) * Math.expm1(depth), 1e-9);
+    }
+  });
+
+  it('reports a narrow well too deep to represent as an error, never as B2* = 1', () => {
+    // λ = 1.001, U = 800: e^800 overflows double precision.
+    expectArgumentError(() => reducedB2FromPotential((x) => (x < 1.001 ? -800 : 0), 1.5), 'betaU');
+  });
+
   it('rejects xMax ≤ 1, non-functions, NaN energies and attraction beyond 700 kT', () => {
     expectArgumentError(() => reducedB2FromPotential(() => -1, 1), 'xMax');
     expectArgumentError(() => reducedB2FromPotential(() => -1, Number.NaN), 'xMax');

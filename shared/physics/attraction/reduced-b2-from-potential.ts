@@ -17,7 +17,10 @@ export interface ReducedB2Options {
  *
  * Source: the virial route (e.g. Hansen & McDonald, *Theory of Simple Liquids*, 4th ed., §3.9),
  * reduced by B2_HS = 2πσ³/3; the square-well closed form 1 − (λ³ − 1)(e^U − 1) is its test.
- * Numerics: adaptive 7/15 Gauss–Kronrod, relative tolerance 1e-11 (absolute 1e-14) unless set.
+ * Numerics: adaptive 7/15 Gauss–Kronrod, relative tolerance 1e-11 (absolute 1e-14) unless set,
+ * on pieces split at the given breakpoints and at the points where a scan towards contact sees
+ * the Mayer function change (contactScanCuts), so a narrow deep well at contact is found even when
+ * no breakpoint is given.
  *
  * @param betaU pair energy in kT at x = r/σ ≥ 1; zero beyond xMax. It may return +Infinity (an
  *   extra hard core) but not NaN, and attraction deeper than 700 kT cannot be represented.
@@ -39,7 +42,8 @@ export function reducedB2FromPotential(betaU: (x: number) => number, xMax: numbe
     }
     return Math.expm1(-energy) * x * x;
   };
-  const cuts = [1, ...(options.breakpoints ?? []).filter((x) => x > 1 && x < xMax).sort((a, b) => a - b), xMax];
+  const given = (options.breakpoints ?? []).filter((x) => x > 1 && x < xMax);
+  const cuts = [...new Set([1, ...given, ...contactScanCuts(mayerTimesShell, 1, Math.min(xMax, ...given.length ? given : [xMax])), xMax])].sort((a, b) => a - b);
   let integral = 0;
   for (let i = 0; i + 1 < cuts.length; i++) {
     integral += adaptiveGaussKronrod(mayerTimesShell, cuts[i], cuts[i + 1], {
@@ -48,4 +52,28 @@ export function reducedB2FromPotential(betaU: (x: number) => number, xMax: numbe
     }).value;
   }
   return 1 - 3 * integral;
+}
+
+/** Points scanned towards the start of the interval: 1 + (end − 1)·2^−k, k = 1…CONTACT_SCAN_DEPTH. */
+const CONTACT_SCAN_DEPTH = 40;
+
+/**
+ * Cut points for the quadrature near contact, from a scan at x_k = start + (end − start)·2^−k
+ * (k = 0…40, down to ~1e-12 of the range): each pair x_{k−1}, x_k across which the integrand
+ * changes by more than half its size (a well's edge). A fixed 15-point rule on [1, xMax] can step over a
+ * well only 1e-3 wide entirely (and report B2* = 1); cut there, each piece either contains the
+ * well edge, which the adaptive rule then resolves, or lies wholly inside or outside it. Smooth
+ * potentials change little between neighbouring scan points and add only a few cuts. Internal.
+ */
+function contactScanCuts(integrand: (x: number) => number, start: number, end: number): number[] {
+  const cuts: number[] = [];
+  let outer = integrand(end);
+  for (let k = 1; k <= CONTACT_SCAN_DEPTH; k++) {
+    const x = start + (end - start) * 2 ** -k;
+    if (x <= start) break;
+    const inner = integrand(x);
+    if (Math.abs(inner - outer) > 0.5 * Math.max(Math.abs(inner), Math.abs(outer))) cuts.push(x, start + (end - start) * 2 ** -(k - 1));
+    outer = inner;
+  }
+  return cuts.filter((x) => x > start && x < end);
 }
