@@ -115,6 +115,8 @@ describe('a shortlist from draft to approval', () => {
   });
 
   it('a manager cannot return without a comment; with one, the author reopens the draft', async () => {
+    // Signing out in the browser above ended every session of the formulator, this agent's too.
+    formulatorAgent = await signedInAgent(suite.stack.app, formulator);
     const created = await formulatorAgent.post('/api/shortlists').send({ programmeId: programme.id, title: `Return me ${Date.now().toString(36)}`, targetState: 'gel', items: [{ recipeId: recipes[0].id, reason: 'only candidate' }] });
     expect(created.status).toBe(201);
     const id = created.body.shortlist.id;
