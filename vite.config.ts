@@ -18,6 +18,7 @@ export default defineConfig({
     reportCompressedSize: true,
   },
   server: {
-    proxy: { '/api': 'http://127.0.0.1:4180' },
+    // The API accepts writes only from PUBLIC_URL's origin, so the proxy presents that one.
+    proxy: { '/api': { target: 'http://127.0.0.1:4180', headers: { origin: 'http://127.0.0.1:4180' } } },
   },
 });

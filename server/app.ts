@@ -9,7 +9,7 @@ import { createLimiters } from './http/limiters';
 import { mountRoutes } from './http/mount';
 import { redactPath } from './http/redact';
 import type { AppDeps } from './http/route';
-import { sameOriginWrites, securityHeaders } from './http/security';
+import { knownHostsOnly, sameOriginWrites, securityHeaders } from './http/security';
 import { ALL_ROUTES } from './routes';
 
 export interface CreateAppOptions {
@@ -24,6 +24,7 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   app.set('trust proxy', deps.config.TRUST_PROXY ? 1 : false);
   app.set('etag', false);
   app.use(securityHeaders(deps.config));
+  app.use(knownHostsOnly(deps.config));
   if (deps.config.LOG_REQUESTS) {
     app.use((req, res, next) => {
       const started = performance.now();

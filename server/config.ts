@@ -12,6 +12,8 @@ const configSchema = z.object({
   PORT: port.default(4180),
   HOST: z.string().default('127.0.0.1'),
   PUBLIC_URL: z.url({ error: 'must be a URL such as http://127.0.0.1:4180' }),
+  /** Host names answered besides PUBLIC_URL's and loopback, comma-separated (e.g. a second DNS name). */
+  ALLOWED_HOSTS: z.string().default(''),
   DB_HOST: z.string().min(1).default('127.0.0.1'),
   DB_PORT: port,
   DB_NAME: z.string().regex(/^[A-Za-z0-9_]{1,64}$/, 'letters, digits and _ only'),

@@ -18,6 +18,8 @@ export const badRequest = (message: string, field?: string, issues?: { path: str
   new HttpError(400, 'invalid_input', message, { field, issues });
 export const unauthorized = (message = 'Sign in first') => new HttpError(401, 'not_signed_in', message);
 export const forbidden = (message = 'Your role may not do this') => new HttpError(403, 'forbidden', message);
+export const misdirected = (message = 'This server does not answer for that host name') =>
+  new HttpError(421, 'unknown_host', message);
 export const notFound = (what = 'Record') => new HttpError(404, 'not_found', `${what} not found`);
 export const conflict = (message: string, extra: Record<string, unknown> = {}) =>
   new HttpError(409, 'conflict', message, extra);
