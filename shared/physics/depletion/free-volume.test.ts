@@ -128,6 +128,21 @@ describe('free-volume theory of colloids with ideal polymer', () => {
     expect(large.stable).toBe(true);
   });
 
+  it('freeVolumeCriticalPoint finds the true minimum at small q and flags one beyond close packing', () => {
+    // Derived: reference/derive-check-values.py (mpmath fvt_critical): q = 0.05 → φ = 0.739206985,
+    // φ_p^R = 0.221439341568568 (just below φ_cp = 0.7405); q = 0.01 → φ = 0.912671132, φ_p^R = 0.180570077389106.
+    const justBelow = freeVolumeCriticalPoint(0.05);
+    expect(justBelow.phi).toBeCloseTo(0.739206984509580, 7);
+    expectRelative(justBelow.polymerReservoir, 0.221439341568568, 1e-12);
+    expect(justBelow.beyondClosePacking).toBe(false);
+    const beyond = freeVolumeCriticalPoint(0.01);
+    expect(beyond.phi).toBeCloseTo(0.912671132159429, 7);
+    expectRelative(beyond.polymerReservoir, 0.180570077389106, 1e-12);
+    expect(beyond.beyondClosePacking).toBe(true);
+    expect(beyond.stable).toBe(false);
+    expect(freeVolumeCriticalPoint(0.5).beyondClosePacking).toBe(false);
+  });
+
   it('freeVolumeCriticalEndpoint is q ≈ 0.3275, near the 1992 paper\'s 0.32', () => {
     // physics.md §4: derived ≈ 0.3275 (mpmath: 0.327544525503449); Lekkerkerker et al. 1992 report
     // about 0.32 (from memory).

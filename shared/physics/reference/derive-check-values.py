@@ -202,6 +202,7 @@ def depletion_recipe_limits():
 
 
 if __name__ == '__main__':
+    print('FVT critical point q = 0.05, 0.01:', *fvt_critical(mpf('0.05'), (mpf('0.739'), mpf('0.2214'))), *fvt_critical(mpf('0.01'), (mpf('0.9127'), mpf('0.18057'))))
     tc = (2 - sqrt(2))/6
     print('PY beta mu near hard spheres (0.3, 1e4), (0.5, 1e5):', py_mu_by_quadrature(mpf('0.3'), mpf('1e4')), py_mu_by_quadrature(mpf('0.5'), mpf('1e5')))
     print('PY beta mu at tau_c: (0.05) quadrature, (0.3) closed form just above:', py_mu_by_quadrature(mpf('0.05'), tc), py_mu_closed(mpf('0.3'), tc*(1 + mpf('1e-20'))))
