@@ -8,6 +8,9 @@ import { PREDICTED_STATES } from './states';
 // (recipeStateMap, then deriveRecipe; a PhysicsArgumentError becomes a 400 on recipeFieldOf).
 // The grids are test inputs, not check values: typical ranges of formulation work.
 
+/** ~4 s on an idle machine (about 25 free-volume maps are built); generous for a loaded one. */
+const SWEEP_TIMEOUT_MS = 60_000;
+
 /** Form fields a physics complaint may be placed on (shared/schemas/recipes.ts). */
 const RECIPE_FIELDS = [
   'fraction.value', 'temperatureC', 'particleId', 'solventId', 'attraction.concentrationGL',
@@ -68,7 +71,7 @@ describe('deriveRecipe over realistic recipe grids', () => {
       }
     }
     expect(problems).toEqual([]);
-  });
+  }, SWEEP_TIMEOUT_MS);
 
   it('derives every salt recipe (1–2000 mM, valence 1–3, radius 5–500 nm, φ 0.01–0.64) or names a field', () => {
     const problems: string[] = [];
@@ -83,5 +86,5 @@ describe('deriveRecipe over realistic recipe grids', () => {
       }
     }
     expect(problems).toEqual([]);
-  });
+  }, SWEEP_TIMEOUT_MS);
 });
