@@ -4,7 +4,7 @@ import { hardSphereFluidSolidCoexistence } from '../hard-spheres/hard-sphere-flu
 import { freeVolumeCriticalEndpoint } from './free-volume-critical-endpoint';
 import { freeVolumeCriticalPoint } from './free-volume-critical-point';
 import { freeVolumeFluidFluidBinodal } from './free-volume-fluid-fluid-binodal';
-import { freeVolumeFluidSolidCoexistence } from './free-volume-fluid-solid-coexistence';
+import { crystalAgainstDiluteGas, freeVolumeFluidSolidCoexistence, freeVolumeFluidSolidUnchecked } from './free-volume-fluid-solid-coexistence';
 import { freeVolumeFraction } from './free-volume-fraction';
 import { freeVolumeSpinodal } from './free-volume-spinodal';
 import { freeVolumeTriplePoint } from './free-volume-triple-point';
@@ -126,6 +126,28 @@ describe('free-volume theory of colloids with ideal polymer', () => {
     expect(large.phi).toBeCloseTo(0.104000553094010, 7);
     expectRelative(large.polymerReservoir, 0.636412047719584, 1e-12);
     expect(large.stable).toBe(true);
+  });
+
+  it('freeVolumeFluidSolidCoexistence solves strong depletion at small q, where the gas is extremely dilute', () => {
+    // Derived: reference/derive-check-values.py (mpmath, fvt_dilute_gas_crystal, solved in ln φ_gas):
+    // q = 0.4, φ_p^R = 20 → φ_gas = 1.43295505642693e-181, φ_solid = 0.735253835782750.
+    const strong = freeVolumeFluidSolidCoexistence(0.4, 20);
+    expectRelative(strong.fluid, 1.43295505642693e-181, 1e-9);
+    expect(strong.solid).toBeCloseTo(0.73525383578275, 10);
+    // The dilute-gas limit agrees with the general solver where both work (q = 0.4, φ_p^R = 15).
+    expectRelative(crystalAgainstDiluteGas(0.4, 15)!.solid, freeVolumeFluidSolidUnchecked(0.4, 15)!.solid, 1e-12);
+    expectRelative(crystalAgainstDiluteGas(0.4, 15)!.fluid, freeVolumeFluidSolidUnchecked(0.4, 15)!.fluid, 1e-9);
+    // Below double precision the gas is reported as 0, never as an error; the crystal stays below φ_cp.
+    for (const q of [0.01, 0.05, 0.1, 0.2, 0.3, 0.4]) {
+      for (const polymer of [10, 15, 20]) {
+        const point = freeVolumeFluidSolidCoexistence(q, polymer);
+        expect(point.fluid).toBeGreaterThanOrEqual(0);
+        expect(point.fluid).toBeLessThan(1e-16);
+        expect(point.solid).toBeLessThan(FCC_CLOSE_PACKING);
+        expect(point.solid).toBeGreaterThan(0.7);
+      }
+    }
+    expect(freeVolumeFluidSolidCoexistence(0.05, 20).fluid).toBe(0);
   });
 
   it('freeVolumeCriticalPoint finds the true minimum at small q and flags one beyond close packing', () => {

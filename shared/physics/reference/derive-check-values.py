@@ -201,7 +201,15 @@ def depletion_recipe_limits():
     return cstar, contact(mpf('0.55'), 1, True), phi_max, contact(mpf('0.3'), 5000, False), c_max
 
 
+def fvt_dilute_gas_crystal(q, r, guess):
+    """Gas-crystal coexistence with an extremely dilute gas, solved in ln(phi_gas)."""
+    pf, mf, ps, ms = fvt(q, r)
+    sol = findroot(lambda L, s: [pf(exp(L)) - ps(s), mf(exp(L)) - ms(s)], guess)
+    return exp(sol[0]), sol[1]
+
+
 if __name__ == '__main__':
+    print('FVT gas-crystal q = 0.4, phi_p^R = 20:', *fvt_dilute_gas_crystal(mpf('0.4'), mpf(20), (mpf(-416.4), mpf('0.73525'))))
     print('FVT critical point q = 0.05, 0.01:', *fvt_critical(mpf('0.05'), (mpf('0.739'), mpf('0.2214'))), *fvt_critical(mpf('0.01'), (mpf('0.9127'), mpf('0.18057'))))
     tc = (2 - sqrt(2))/6
     print('PY beta mu near hard spheres (0.3, 1e4), (0.5, 1e5):', py_mu_by_quadrature(mpf('0.3'), mpf('1e4')), py_mu_by_quadrature(mpf('0.5'), mpf('1e5')))
