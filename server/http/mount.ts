@@ -5,7 +5,6 @@ import { recordAudit } from '../services/audit';
 import { currentUser } from './authenticate';
 import type { AppDeps, HandlerContext, LimiterName, RouteSpec } from './route';
 import { parseOrThrow } from './validate';
-import { writeCommitted } from './write-events';
 
 type Limiters = Record<LimiterName, RequestHandler>;
 
@@ -82,7 +81,6 @@ function runHandler(spec: RouteSpec, deps: AppDeps): RequestHandler {
           })
         : await spec.handler(ctx);
       ctx.transaction = null;
-      if (transactional) writeCommitted();
       for (const task of tasks) {
         // The write is committed: a failed side effect (mail) is logged, never undoes it.
         await task().catch((error: Error) => console.warn(`after-commit task failed: ${error.message}`));

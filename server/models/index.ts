@@ -13,6 +13,7 @@ import { Shortlist, ShortlistItem, ShortlistEvent } from './shortlist';
 import { Calibration } from './calibration';
 import { Plan } from './plan';
 import { PlanRecipe } from './plan-recipe';
+import { programmeWritten } from '../http/write-events';
 
 export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe };
 
@@ -45,4 +46,23 @@ export function initModels(sequelize: Sequelize) {
   Plan.belongsTo(User, { foreignKey: 'createdBy', as: 'creator' });
   Plan.hasMany(PlanRecipe, { foreignKey: 'planId', as: 'made' });
   PlanRecipe.belongsTo(Recipe, { foreignKey: 'recipeId', as: 'recipe' });
+  watchProgrammeWrites();
+}
+
+/**
+ * A saved recipe, observation or calibration tells the write events which programme it changed
+ * (after its transaction commits), so the map overlay drops only that programme's cache.
+ * Raw inserts (createObservation) call programmeWritten themselves.
+ */
+function watchProgrammeWrites() {
+  type Hookable = { addHook: (name: string, key: string, fn: (...args: never[]) => void) => void };
+  for (const model of [Recipe, Observation, Calibration] as unknown as Hookable[]) {
+    const one = (row: { programmeId: number }, options: { transaction?: unknown }) => programmeWritten(row.programmeId, options.transaction as never);
+    model.addHook('afterCreate', 'programme-written', one as never);
+    model.addHook('afterUpdate', 'programme-written', one as never);
+    model.addHook('afterDestroy', 'programme-written', one as never);
+    model.addHook('afterBulkCreate', 'programme-written', ((rows: { programmeId: number }[], options: { transaction?: unknown }) => {
+      for (const programmeId of new Set(rows.map((r) => r.programmeId))) programmeWritten(programmeId, options.transaction as never);
+    }) as never);
+  }
 }

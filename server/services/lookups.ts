@@ -9,5 +9,12 @@ export async function requireProgramme(id: number, transaction: Transaction | nu
   return programme;
 }
 
+/** The programme, refused (400 on `field`) when it is archived: nothing new goes into one. */
+export async function requireLiveProgramme(id: number, transaction: Transaction | null, field = 'programmeId') {
+  const programme = await requireProgramme(id, transaction);
+  if (programme.archivedAt) throw badRequest(`${field}: programme ${programme.name} is archived; restore it before adding to it`, field);
+  return programme;
+}
+
 /** Escapes LIKE wildcards in user text. */
 export const likePattern = (text: string) => `%${text.replace(/[%_\\]/g, '\\$&')}%`;

@@ -4,7 +4,7 @@ import { QueryTypes, type Sequelize } from 'sequelize';
 import type { ObservedState, PredictedState } from '../../shared/states';
 import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '../../shared/views/map-points';
 import type { MapPoints, RecipeDerived } from '../../shared/views/team-data';
-import { onWriteCommitted } from '../http/write-events';
+import { onProgrammeWritten } from '../http/write-events';
 
 const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : 4 * (1 - b2));
 /** Six significant digits: far finer than any map can show, and a third of the bytes. */
@@ -82,12 +82,12 @@ const MAX_AGE_MS = 10 * 60_000;
  */
 const TRUST_MS = 250;
 const cache = new Map<number, CachedMapPoints & { version: string; at: number; checkedAt: number }>();
-/** Moves on every committed write, so a build that started before the write is not kept. */
-let cacheGeneration = 0;
-onWriteCommitted(() => {
-  cacheGeneration += 1;
-  cache.clear();
-  inFlight.clear();
+/** Per programme, moves on with every committed write to it, so a build that started before the write is not kept. */
+const generations = new Map<number, number>();
+onProgrammeWritten((programmeId) => {
+  generations.set(programmeId, (generations.get(programmeId) ?? 0) + 1);
+  cache.delete(programmeId);
+  inFlight.delete(programmeId);
 });
 
 /** Work in flight per programme, so that twenty requests arriving together check and build once. */
@@ -111,7 +111,7 @@ export function cachedMapPoints(sequelize: Sequelize, programmeId: number): Prom
 }
 
 async function checkOrBuild(sequelize: Sequelize, programmeId: number): Promise<CachedMapPoints | null> {
-  const generation = cacheGeneration;
+  const generation = generations.get(programmeId) ?? 0;
   const version = await programmeVersion(sequelize, programmeId);
   if (version === null) return null;
   const hit = cache.get(programmeId);
@@ -122,7 +122,7 @@ async function checkOrBuild(sequelize: Sequelize, programmeId: number): Promise<
   const json = Buffer.from(JSON.stringify(await buildMapPoints(sequelize, programmeId)));
   const entry = { version, at: Date.now(), checkedAt: Date.now(), json, gzip: gzipSync(json, { level: 6 }), etag: `"${createHash('sha1').update(json).digest('base64url')}"` };
   // A write committed while this was being read may not be in it: answer with it, keep it not.
-  if (generation === cacheGeneration) {
+  if (generation === (generations.get(programmeId) ?? 0)) {
     cache.set(programmeId, entry);
     if (cache.size > 100) cache.delete(cache.keys().next().value!);
   }

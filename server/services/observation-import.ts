@@ -5,7 +5,7 @@ import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS, observationFi
 import type { ImportReport, ImportRowProblem } from '../../shared/views/team-data';
 import { badRequest } from '../errors';
 import type { HandlerContext } from '../http/route';
-import { ImportBatch, Observation, Recipe } from '../models';
+import { ImportBatch, Observation, Programme, Recipe } from '../models';
 import { unescapeCell } from './csv-cells';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -56,7 +56,12 @@ export async function validateImport(text: string, transaction: Transaction | nu
   if (problems.length) return { report: { ok: false, rows: read.records.length, imported: 0, problems }, rows: [] };
 
   const codes = [...new Set(read.records.map((r) => r.recipe_code).filter(Boolean))];
-  const recipes = await Recipe.findAll({ where: { code: { [Op.in]: codes } }, attributes: ['id', 'code', 'programmeId', 'archivedAt'], transaction });
+  const recipes = (await Recipe.findAll({
+    where: { code: { [Op.in]: codes } },
+    attributes: ['id', 'code', 'programmeId', 'archivedAt'],
+    include: [{ model: Programme, as: 'programme', attributes: ['id', 'name', 'archivedAt'] }],
+    transaction,
+  })) as (Recipe & { programme?: Programme })[];
   const byCode = new Map(recipes.map((r) => [r.code, r]));
   const rows: ParsedRow[] = [];
   read.records.forEach((record, index) => {
@@ -67,6 +72,7 @@ export async function validateImport(text: string, transaction: Transaction | nu
     if (!record.recipe_code) fail('recipe_code', 'Give the recipe code');
     else if (!recipe) fail('recipe_code', `No recipe has the code ${record.recipe_code}`);
     else if (recipe.archivedAt) fail('recipe_code', `Recipe ${record.recipe_code} is archived`);
+    else if (recipe.programme?.archivedAt) fail('recipe_code', `Programme ${recipe.programme.name} of recipe ${record.recipe_code} is archived`);
     const values: Record<string, unknown> = {};
     const check = (column: string, key: keyof typeof observationFields, raw: unknown) => {
       const result = observationFields[key].safeParse(raw);

@@ -2,8 +2,9 @@ import { Op, QueryTypes, Sequelize, type Transaction, type WhereOptions } from '
 import type { ObservationInput, ObservationListQuery } from '../../shared/schemas/observations';
 import { badRequest, forbidden, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
-import { Attachment, Observation, Recipe, User } from '../models';
-import { requireProgramme } from './lookups';
+import { programmeWritten } from '../http/write-events';
+import { Attachment, Observation, Programme, Recipe, User } from '../models';
+import { requireLiveProgramme } from './lookups';
 import { predictAdhoc } from './predictions';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -44,13 +45,20 @@ export function observationWhere(query: ObservationListQuery): WhereOptions {
 async function resolveSubject(ctx: Ctx, input: ObservationInput) {
   if (input.recipeId !== undefined) {
     // Only what the record and its answer need (as observationIncludes), not the recipe's whole row.
-    const recipe = await Recipe.findByPk(input.recipeId, { attributes: ['id', 'code', 'predictedState', 'programmeId', 'archivedAt'], transaction: ctx.transaction });
+    // The programme comes in the same statement: nothing new goes into an archived one.
+    const recipe = await Recipe.findByPk(input.recipeId, {
+      attributes: ['id', 'code', 'predictedState', 'programmeId', 'archivedAt'],
+      include: [{ model: Programme, as: 'programme', attributes: ['id', 'name', 'archivedAt'] }],
+      transaction: ctx.transaction,
+    });
     if (!recipe) throw badRequest('recipeId: no such recipe', 'recipeId');
     if (recipe.archivedAt) throw badRequest(`recipeId: recipe ${recipe.code} is archived`, 'recipeId');
+    const programme = (recipe as Recipe & { programme?: Programme }).programme;
+    if (programme?.archivedAt) throw badRequest(`recipeId: programme ${programme.name} is archived; restore it before adding to it`, 'recipeId');
     return { recipe, fields: { programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null } };
   }
   const adhoc = input.adhoc!;
-  await requireProgramme(adhoc.programmeId, ctx.transaction);
+  await requireLiveProgramme(adhoc.programmeId, ctx.transaction, 'adhoc.programmeId');
   return {
     recipe: null,
     fields: {
@@ -101,6 +109,7 @@ export async function createObservation(ctx: Ctx, input: ObservationInput) {
     ],
   });
   const observation = Observation.build({ ...values, id: Number(insertId), archivedAt: null, createdAt: now, updatedAt: now }, { isNewRecord: false, raw: true });
+  programmeWritten(values.programmeId, ctx.transaction);
   await ctx.audit({ action: 'observation.created', entityType: 'observation', entityId: observation.id, details: { recipeId: fields.recipeId, state: input.observedState } });
   // Everything the answer shows is at hand: no need to read the new row back with its joins.
   return Object.assign(observation, { recipe, observer: ctx.user, attachments: [] }) as Awaited<ReturnType<typeof loadObservation>>;

@@ -6,7 +6,7 @@ import { badRequest, conflict, forbidden, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { shortlistDecidedMail, shortlistSubmittedMail } from '../mail/shortlist-mails';
 import { Programme, Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
-import { requireProgramme } from './lookups';
+import { requireLiveProgramme } from './lookups';
 import { snapshotOf } from './recipe-snapshots';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -60,7 +60,7 @@ function requireAuthorOrAdmin(ctx: Ctx, shortlist: Shortlist) {
 }
 
 export async function createShortlist(ctx: Ctx, input: ShortlistInput) {
-  await requireProgramme(input.programmeId, ctx.transaction);
+  await requireLiveProgramme(input.programmeId, ctx.transaction);
   await checkItems(input, ctx.transaction);
   const shortlist = await Shortlist.create(
     { programmeId: input.programmeId, title: input.title, purpose: input.purpose ?? null, targetState: input.targetState, status: 'draft', authorId: ctx.user!.id, reviewerId: null, decisionComment: null, submittedAt: null, decidedAt: null },
@@ -77,6 +77,7 @@ export async function updateShortlist(ctx: Ctx, id: number, input: ShortlistInpu
   requireAuthorOrAdmin(ctx, shortlist);
   if (shortlist.status !== 'draft') throw conflict(`A ${shortlist.status} shortlist cannot be edited${shortlist.status === 'returned' ? '; reopen it as a draft first' : ''}`, { status: shortlist.status });
   if (input.programmeId !== shortlist.programmeId) throw badRequest('programmeId: a shortlist stays in its programme', 'programmeId');
+  await requireLiveProgramme(input.programmeId, ctx.transaction);
   await checkItems(input, ctx.transaction);
   shortlist.set({ title: input.title, purpose: input.purpose ?? null, targetState: input.targetState });
   await shortlist.save({ transaction: ctx.transaction });
