@@ -16,7 +16,7 @@ export function freeVolumeFluidPieces(
   polymerReservoir: number,
   critical = freeVolumeCriticalPointUnchecked(q),
   liquidLimit = FLUID_BRANCH_LIMIT,
-): { pieces: PhaseBranch[]; spinodal: { low: number; high: number } | null } {
+): { pieces: PhaseBranch[]; spinodal: { low: number; high: number; denseRoot: number | null } | null } {
   if (polymerReservoir <= critical.polymerReservoir) {
     return { pieces: [freeVolumeBranch('fluid', q, polymerReservoir, 1e-300, liquidLimit)], spinodal: null };
   }
@@ -30,5 +30,7 @@ export function freeVolumeFluidPieces(
   const pieces: PhaseBranch[] = [];
   if (low !== null) pieces.push(freeVolumeBranch('fluid', q, polymerReservoir, 1e-300, low));
   if (high !== null && high < liquidLimit) pieces.push(freeVolumeBranch('fluid', q, polymerReservoir, high, liquidLimit));
-  return { pieces, spinodal: low !== null ? { low, high: high ?? LIQUID_BRANCH_LIMIT } : null };
+  // `high` stays usable as the end of the gas–liquid region (the search bound when the dense root
+  // is missing); `denseRoot` says whether that end is a real root (null: none below φ = 0.99).
+  return { pieces, spinodal: low !== null ? { low, high: high ?? LIQUID_BRANCH_LIMIT, denseRoot: high } : null };
 }

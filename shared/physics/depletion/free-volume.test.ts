@@ -87,7 +87,8 @@ describe('free-volume theory of colloids with ideal polymer', () => {
   });
 
   it('freeVolumeFluidFluidBinodal satisfies equal pressure and chemical potential to 1e-9 and matches mpmath', () => {
-    for (const [q, polymer] of [[0.1, 0.3], [0.3, 0.5], [0.5, 0.6], [0.5, 1], [1, 1.2]]) {
+    // q = 0.15 near its critical point: the smallest-q case whose liquid lies below close packing.
+    for (const [q, polymer] of [[0.15, freeVolumeCriticalPoint(0.15).polymerReservoir * 1.1], [0.3, 0.5], [0.5, 0.6], [0.5, 1], [1, 1.2]]) {
       const pair = freeVolumeFluidFluidBinodal(q, polymer)!;
       expect(pair, `binodal at q=${q}, φ_p^R=${polymer}`).not.toBeNull();
       const gas = fluid(pair.gas, q, polymer);
@@ -102,15 +103,15 @@ describe('free-volume theory of colloids with ideal polymer', () => {
   });
 
   it('freeVolumeSpinodal lies inside the binodal and meets it at the critical point', () => {
-    for (const [q, factor] of [[0.1, 1.1], [0.5, 1.3], [1, 2]]) {
+    for (const [q, factor] of [[0.15, 1.1], [0.5, 1.3], [1, 2]]) {
       const critical = freeVolumeCriticalPoint(q);
       const polymer = critical.polymerReservoir * factor;
       const spinodal = freeVolumeSpinodal(q, polymer)!;
       const binodal = freeVolumeFluidFluidBinodal(q, polymer)!;
       expect(binodal.gas).toBeLessThan(spinodal.low);
       expect(spinodal.low).toBeLessThan(critical.phi);
-      expect(critical.phi).toBeLessThan(spinodal.high);
-      expect(spinodal.high).toBeLessThan(binodal.liquid);
+      expect(critical.phi).toBeLessThan(spinodal.high!);
+      expect(spinodal.high!).toBeLessThan(binodal.liquid);
       expect(freeVolumeSpinodal(q, critical.polymerReservoir * 0.99)).toBeNull();
       expect(freeVolumeFluidFluidBinodal(q, critical.polymerReservoir * 0.99)).toBeNull();
     }
@@ -148,6 +149,27 @@ describe('free-volume theory of colloids with ideal polymer', () => {
       }
     }
     expect(freeVolumeFluidSolidCoexistence(0.05, 20).fluid).toBe(0);
+  });
+
+  it('free-volume gas–liquid results never put a liquid or a spinodal at or beyond close packing', () => {
+    // The theory's formal liquids at q = 0.05, φ_p^R = 0.3 (0.886) and q = 0.05, φ_p^R = 1 (0.938)
+    // lie beyond φ_cp = 0.7405 (physics.md §1): no coexistence is reported there.
+    expect(freeVolumeFluidFluidBinodal(0.05, 0.3)).toBeNull();
+    expect(freeVolumeFluidFluidBinodal(0.05, 1)).toBeNull();
+    // The dense spinodal of q = 0.01 would lie at φ ≈ 0.97: flagged as no root (null), not a bound.
+    const spinodal = freeVolumeSpinodal(0.01, 1)!;
+    expect(spinodal.high).toBeNull();
+    expect(spinodal.low).toBeGreaterThan(0);
+    for (const q of [0.01, 0.05, 0.1, 0.2, 0.4, 0.5, 1]) {
+      for (const polymer of [0.3, 1, 5, 20]) {
+        const pair = freeVolumeFluidFluidBinodal(q, polymer);
+        if (pair) expect(pair.liquid).toBeLessThan(FCC_CLOSE_PACKING);
+        const limits = freeVolumeSpinodal(q, polymer);
+        if (limits && limits.high !== null) expect(limits.high).toBeLessThan(FCC_CLOSE_PACKING);
+      }
+    }
+    // Unchanged where the liquid is a liquid (mpmath value of the existing check: q = 0.5, φ_p^R = 1).
+    expect(freeVolumeFluidFluidBinodal(0.5, 1)!.liquid).toBeCloseTo(0.514167, 5);
   });
 
   it('freeVolumeCriticalPoint finds the true minimum at small q and flags one beyond close packing', () => {
