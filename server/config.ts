@@ -38,6 +38,8 @@ const configSchema = z.object({
   DATA_DIR: z.string().min(1).default('.data/files'),
   UPLOAD_MAX_BYTES: z.coerce.number().int().min(1024).default(10 * 1024 * 1024),
   UPLOAD_MAX_FILES: z.coerce.number().int().min(1).max(50).default(8),
+  /** A whole multipart request (all its files): larger ones are cut off while they stream. */
+  UPLOAD_MAX_REQUEST_BYTES: z.coerce.number().int().min(1024).default(25 * 1024 * 1024),
   LOG_REQUESTS: flag.default(false),
 });
 

@@ -1,6 +1,6 @@
 import type { Express, NextFunction, Request, RequestHandler, Response } from 'express';
 import { can } from '../../shared/permissions';
-import { badRequest, forbidden, unauthorized, unsupportedMediaType } from '../errors';
+import { badRequest, forbidden, payloadTooLarge, unauthorized, unsupportedMediaType } from '../errors';
 import { recordAudit } from '../services/audit';
 import { currentUser } from './authenticate';
 import type { AppDeps, HandlerContext, LimiterName, RouteSpec } from './route';
@@ -16,22 +16,70 @@ export function mountRoutes(app: Express, specs: RouteSpec[], deps: AppDeps, lim
   for (const spec of specs) {
     const chain: RequestHandler[] = (spec.limiters ?? []).map((name) => limiters[name]);
     chain.push(authenticateAndAuthorise(spec, deps));
-    if (spec.upload) chain.push(readableUpload(spec.upload(deps)));
+    if (spec.upload) {
+      chain.push(accessBeforeUpload(spec, deps));
+      chain.push(readableUpload(spec.upload(deps), deps.config.UPLOAD_MAX_REQUEST_BYTES));
+    }
     chain.push(runHandler(spec, deps));
     app[spec.method](spec.path, ...chain);
   }
 }
 
+/** Validates the params and runs the route's record-level check before the body is read. */
+function accessBeforeUpload(spec: RouteSpec, deps: AppDeps): RequestHandler {
+  return async (req, res, next) => {
+    try {
+      const params = spec.params ? parseOrThrow(spec.params, req.params, 'params') : undefined;
+      if (spec.beforeUpload) await spec.beforeUpload({ user: res.locals.user, params, deps });
+      next();
+    } catch (error) {
+      refuseUnreadBody(req, res);
+      next(error);
+    }
+  };
+}
+
+/** The answer goes out without reading the rest of the body; the connection closes after it. */
+function refuseUnreadBody(req: Request, res: Response) {
+  res.setHeader('Connection', 'close');
+  res.once('finish', () => req.destroy());
+}
+
 /**
- * Multer reports its own limits as MulterError (the error middleware maps those); anything
- * else it throws means the multipart body itself could not be read: a 400, not a 500.
+ * Reads a multipart body with multer, cut off at `maxBytes` for the whole request: a declared
+ * length above it is refused before reading, and a body that grows past it while streaming is
+ * dropped there. Multer reports its own limits as MulterError (the error middleware maps those);
+ * anything else it throws means the body could not be read: a 400, not a 500.
  */
-function readableUpload(upload: RequestHandler): RequestHandler {
-  return (req, res, next) =>
+function readableUpload(upload: RequestHandler, maxBytes: number): RequestHandler {
+  const tooLarge = () => payloadTooLarge(`The upload is larger than ${Math.round(maxBytes / 1024 / 1024)} MB in all`);
+  return (req, res, next) => {
+    let done = false;
+    const finish = (error?: unknown) => {
+      if (done) return;
+      done = true;
+      next(error);
+    };
+    if (Number(req.headers['content-length'] ?? 0) > maxBytes) {
+      refuseUnreadBody(req, res);
+      return finish(tooLarge());
+    }
+    let seen = 0;
+    const count = (chunk: Buffer) => {
+      seen += chunk.length;
+      if (seen <= maxBytes) return;
+      req.off('data', count);
+      req.unpipe();
+      refuseUnreadBody(req, res);
+      finish(tooLarge());
+    };
+    req.on('data', count);
     upload(req, res, (error?: unknown) => {
-      if (!error || (error as { name?: string }).name === 'MulterError') return next(error);
-      next(badRequest(`The upload could not be read: ${String((error as Error).message ?? error).slice(0, 120)}`, 'files'));
+      req.off('data', count);
+      if (!error || (error as { name?: string }).name === 'MulterError') return finish(error);
+      finish(badRequest(`The upload could not be read: ${String((error as Error).message ?? error).slice(0, 120)}`, 'files'));
     });
+  };
 }
 
 function authenticateAndAuthorise(spec: RouteSpec, deps: AppDeps): RequestHandler {

@@ -58,6 +58,11 @@ export interface RouteSpec<B = unknown, Q = unknown, P = unknown> {
   body?: z.ZodType<B>;
   /** Middleware that reads a multipart body (multer); runs after authorisation. */
   upload?: (deps: AppDeps) => RequestHandler;
+  /**
+   * For upload routes: the record-level access check, run on the validated params before a
+   * byte of the body is read (so a stranger's upload is refused without being buffered).
+   */
+  beforeUpload?: (ctx: { user: User; params: P; deps: AppDeps }) => Promise<void>;
   transactional?: boolean;
   /** Return a Reply to send JSON; return nothing when the handler wrote the response itself. */
   handler: (ctx: HandlerContext<B, Q, P>) => Promise<Reply | void>;

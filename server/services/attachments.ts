@@ -18,13 +18,15 @@ const TEXT_EXTENSIONS: Record<string, string> = { '.csv': 'text/csv', '.txt': 't
 export function attachmentUpload(deps: AppDeps): RequestHandler {
   return multer({
     storage: multer.memoryStorage(),
+    // File names without a charset are taken as UTF-8 (what browsers send), not Latin-1.
+    defParamCharset: 'utf8',
     limits: { fileSize: deps.config.UPLOAD_MAX_BYTES, files: deps.config.UPLOAD_MAX_FILES, fields: 10, fieldSize: 10_000, parts: deps.config.UPLOAD_MAX_FILES + 10 },
   }).array('files', deps.config.UPLOAD_MAX_FILES);
 }
 
 /** A CSV upload: one file under the field name "file". */
 export function csvUpload(deps: AppDeps): RequestHandler {
-  return multer({ storage: multer.memoryStorage(), limits: { fileSize: deps.config.UPLOAD_MAX_BYTES, files: 1, fields: 10, parts: 12 } }).single('file');
+  return multer({ storage: multer.memoryStorage(), defParamCharset: 'utf8', limits: { fileSize: deps.config.UPLOAD_MAX_BYTES, files: 1, fields: 10, parts: 12 } }).single('file');
 }
 
 /** True for bytes that decode as UTF-8 text without NUL or other control bytes (tab, CR, LF allowed). */

@@ -115,6 +115,13 @@ export async function createObservation(ctx: Ctx, input: ObservationInput) {
   return Object.assign(observation, { recipe, observer: ctx.user, attachments: [] }) as Awaited<ReturnType<typeof loadObservation>>;
 }
 
+/** Before an upload is read: the observation exists and is the user's own (or the user is an administrator). */
+export async function requireOwnObservation(user: User, id: number) {
+  const observation = await Observation.findByPk(id, { attributes: ['id', 'observerId'] });
+  if (!observation) throw notFound('Observation');
+  if (observation.observerId !== user.id && user.role !== 'admin') throw forbidden('Only the observer or an administrator may change this record');
+}
+
 /** A bench record is changed by the person who observed it, or an administrator. */
 export async function lockOwnObservation(ctx: Ctx, id: number) {
   const observation = await Observation.findByPk(id, { transaction: ctx.transaction, lock: ctx.transaction?.LOCK.UPDATE });

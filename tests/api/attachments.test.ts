@@ -1,9 +1,12 @@
 import { createHash } from 'node:crypto';
+import { createServer, request as httpRequest } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import request from 'supertest';
 import { existsSync, readdirSync } from 'node:fs';
 import { join, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Attachment, type Programme } from '../../server/models';
-import { buildUser, signedInAgent } from '../support/builders';
+import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, elfBytes, pngBytes, recipeInput } from '../support/team-builders';
 import { tableCounts } from '../support/table-counts';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -106,5 +109,73 @@ describe('POST /api/observations/:id/attachments', () => {
     const [png, text] = upload.body.attachments;
     expect((await scientist.get(`/api/attachments/${png.id}?inline=true`)).headers['content-disposition']).toMatch(/^inline/);
     expect((await scientist.get(`/api/attachments/${text.id}?inline=true`)).headers['content-disposition']).toMatch(/^attachment/);
+  });
+});
+
+/** The session cookie of a fresh sign-in, for requests made without supertest. */
+async function sessionCookieOf(who: TestUser) {
+  const response = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
+  return String(response.headers['set-cookie']).split(';')[0];
+}
+
+/**
+ * Sends the headers of a multipart upload declaring `declaredBytes` and only the first 64 KB of
+ * it, then waits for an answer: a server that buffers the body first never answers.
+ */
+async function statusBeforeBodyIsSent(path: string, cookie: string, declaredBytes: number): Promise<number | 'no answer'> {
+  const server = createServer(stack.app);
+  await new Promise<void>((done) => server.listen(0, '127.0.0.1', () => done()));
+  const { port } = server.address() as AddressInfo;
+  try {
+    return await new Promise((resolveStatus) => {
+      const timer = setTimeout(() => {
+        req.destroy();
+        resolveStatus('no answer');
+      }, 3000);
+      const req = httpRequest({ host: '127.0.0.1', port, path, method: 'POST', headers: { Cookie: cookie, 'Content-Type': 'multipart/form-data; boundary=XyZ', 'Content-Length': String(declaredBytes) } }, (res) => {
+        clearTimeout(timer);
+        res.resume();
+        resolveStatus(res.statusCode ?? 0);
+      });
+      req.on('error', () => {});
+      req.write(Buffer.concat([Buffer.from('--XyZ\r\nContent-Disposition: form-data; name="files"; filename="big.png"\r\nContent-Type: image/png\r\n\r\n'), Buffer.alloc(64 * 1024)]));
+    });
+  } finally {
+    server.closeAllConnections();
+    await new Promise<void>((done) => server.close(() => done()));
+  }
+}
+
+describe('uploads are checked before they are read', () => {
+  it('POST /api/observations/:id/attachments by someone else is refused with 403 before the body arrives', async () => {
+    const stranger = await buildUser({ role: 'scientist' });
+    const status = await statusBeforeBodyIsSent(`/api/observations/${observationId}/attachments`, await sessionCookieOf(stranger), 20 * 1024 * 1024);
+    expect(status).toBe(403);
+  });
+
+  it('a declared length over the request cap is refused with 413 before the body arrives', async () => {
+    const owner = await buildUser({ role: 'admin' });
+    const status = await statusBeforeBodyIsSent(`/api/observations/${observationId}/attachments`, await sessionCookieOf(owner), stack.config.UPLOAD_MAX_REQUEST_BYTES + 1);
+    expect(status).toBe(413);
+  });
+
+  it('files each within the per-file limit but over the request cap together are refused with 413 and store nothing', async () => {
+    const capped = stack.appWith({ UPLOAD_MAX_BYTES: '100000', UPLOAD_MAX_REQUEST_BYTES: '150000' });
+    const agent = request.agent(capped);
+    const owner = await buildUser({ role: 'admin' });
+    await agent.post('/api/session').send({ email: owner.email, password: owner.password });
+    const before = { files: storedFiles(), rows: await tableCounts(stack.sequelize) };
+    const part = () => Buffer.concat([pngBytes(4, 4), Buffer.alloc(90_000)]);
+    const response = await agent.post(`/api/observations/${observationId}/attachments`).attach('files', part(), 'a.png').attach('files', part(), 'b.png').attach('files', part(), 'c.png');
+    expect(response.status).toBe(413);
+    expect(response.body.error.message).toMatch(/larger than/);
+    expect(storedFiles()).toEqual(before.files);
+    expect(await tableCounts(stack.sequelize)).toEqual(before.rows);
+  });
+
+  it('keeps a non-ASCII file name as written (UTF-8), not as Latin-1 mojibake', async () => {
+    const response = await scientist.post(`/api/observations/${observationId}/attachments`).attach('files', pngBytes(), 'gélose à 2 % – jour 3.png');
+    expect(response.status).toBe(201);
+    expect(response.body.attachments[0].originalName).toBe('gélose à 2 % – jour 3.png');
   });
 });

@@ -9,7 +9,7 @@ import { presentObservation } from '../../presenters/observation';
 import { attachmentUpload, csvUpload, sniff, storeBytes } from '../../services/attachments';
 import { escapeCell } from '../../services/csv-cells';
 import { importObservations } from '../../services/observation-import';
-import { archiveObservation, createObservation, loadObservation, lockOwnObservation, observationIncludes, observationWhere, updateObservation } from '../../services/observations';
+import { archiveObservation, createObservation, loadObservation, lockOwnObservation, observationIncludes, observationWhere, requireOwnObservation, updateObservation } from '../../services/observations';
 import { Attachment } from '../../models';
 import { presentAttachment } from '../../presenters/observation';
 
@@ -114,6 +114,7 @@ export const observationRoutes = [
     summary: 'Attach micrographs (PNG, JPEG, TIFF) or instrument files (CSV, TXT)',
     params: idParamSchema,
     upload: attachmentUpload,
+    beforeUpload: ({ user, params }) => requireOwnObservation(user, params.id),
     async handler(ctx) {
       const files = (ctx.req.files as Express.Multer.File[] | undefined) ?? [];
       if (files.length === 0) throw badRequest('files: attach at least one file under the field name "files"', 'files');
