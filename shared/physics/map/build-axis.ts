@@ -60,14 +60,20 @@ export function buildAxis(model: MapModel, yMax: number | undefined): MapAxis {
   };
 }
 
-/** Reservoir polymer fraction at which the Asakura–Oosawa B2* reaches `b2` (Brent, 1e-12). */
+/**
+ * Reservoir polymer fraction at which the Asakura–Oosawa B2* reaches `b2` (Brent, 1e-12).
+ * Depletion only attracts, so B2* ≤ 1: a target at or above 1 (asked for by a strongly negative
+ * attraction shift, e.g. −10 − (−15) = +5) needs no polymer and gives 0, the weakest level.
+ * A target beyond a 600 kT contact attraction cannot be reached and is reported against `b2`.
+ */
 export function depletionPolymerForB2(q: number, b2: number): number {
+  if (b2 >= 1) return 0;
   const contactLimit = 600 / (1 + 3 / (2 * q));
   const excess = (polymer: number) => asakuraOosawaReducedB2(q, polymer) - b2;
   let high = 0.1;
   while (excess(high) > 0 && high < contactLimit) high = Math.min(high * 2, contactLimit);
   const root = brentRoot(excess, 0, high, { absoluteTolerance: 1e-12 });
-  if (root === null) throw new PhysicsArgumentError('model.q', 'a size ratio whose depletion attraction can reach the top of the map', q);
+  if (root === null) throw new PhysicsArgumentError('b2', `a reduced second virial coefficient that depletion at q = ${q} reaches within 600 kT at contact`, b2);
   return root;
 }
 
