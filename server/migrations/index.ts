@@ -6,6 +6,7 @@ import * as m0004 from './0004-plans';
 import * as m0005 from './0005-programme-change-indexes';
 import * as m0006 from './0006-shortlist-item-snapshots';
 import * as m0007 from './0007-user-session-version';
+import * as m0008 from './0008-idempotent-writes';
 
 export interface Migration {
   name: string;
@@ -22,4 +23,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0004-plans', ...m0004 },
   { name: '0006-shortlist-item-snapshots', ...m0006 },
   { name: '0007-user-session-version', ...m0007 },
+  { name: '0008-idempotent-writes', ...m0008 },
 ];

@@ -9,6 +9,8 @@ export class ImportBatch extends Model<InferAttributes<ImportBatch>, InferCreati
   declare fileName: string | null;
   declare rowCount: number;
   declare report: ImportReport;
+  /** Checksum of the file the key was first used with (null for batches from before it was kept). */
+  declare contentSha256: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   static initModel(sequelize: Sequelize) {
@@ -20,6 +22,7 @@ export class ImportBatch extends Model<InferAttributes<ImportBatch>, InferCreati
         fileName: { type: DataTypes.STRING(255), allowNull: true },
         rowCount: { type: DataTypes.INTEGER, allowNull: false },
         report: { type: DataTypes.JSON, allowNull: false },
+        contentSha256: { type: DataTypes.CHAR(64), allowNull: true },
         createdAt: DataTypes.DATE(3),
       },
       { sequelize, tableName: 'import_batches', modelName: 'ImportBatch', updatedAt: false },

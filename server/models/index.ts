@@ -13,11 +13,12 @@ import { Shortlist, ShortlistItem, ShortlistEvent } from './shortlist';
 import { Calibration } from './calibration';
 import { Plan } from './plan';
 import { PlanRecipe } from './plan-recipe';
+import { IdempotentRequest } from './idempotent-request';
 import { programmeWritten } from '../http/write-events';
 
-export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe };
+export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest };
 
-const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe];
+const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest];
 
 /** Binds every model to the process's Sequelize instance and declares the associations. */
 export function initModels(sequelize: Sequelize) {

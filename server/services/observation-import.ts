@@ -3,10 +3,10 @@ import { parse } from 'csv-parse/sync';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS, observationFields } from '../../shared/schemas/observations';
 import type { ImportReport, ImportRowProblem } from '../../shared/views/team-data';
-import { badRequest } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { ImportBatch, Observation, Programme, Recipe } from '../models';
 import { unescapeCell } from './csv-cells';
+import { idempotencyKeyOf, keyReused, sha256 } from './idempotency';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -120,12 +120,16 @@ export async function validateImport(text: string, transaction: Transaction | nu
 export async function importObservations(ctx: Ctx, input: { text: string; fileName: string | null; idempotencyKey: string | null; dryRun: boolean }): Promise<{ status: number; report: ImportReport }> {
   const transaction = ctx.transaction;
   const userId = ctx.user!.id;
-  if (input.idempotencyKey !== null && !/^[\w.:-]{8,200}$/.test(input.idempotencyKey)) {
-    throw badRequest('Idempotency-Key: use 8 to 200 letters, digits, dots, colons, dashes or underscores', 'Idempotency-Key');
-  }
-  if (input.idempotencyKey && !input.dryRun) {
-    const earlier = await ImportBatch.findOne({ where: { userId, idempotencyKey: input.idempotencyKey }, transaction });
-    if (earlier) return { status: 200, report: { ...earlier.report, replayed: true } };
+  const idempotencyKey = idempotencyKeyOf(input.idempotencyKey ?? undefined);
+  const contentSha256 = sha256(input.text);
+  // The same key with another file is a mistake to report, not a replay of the first import.
+  const replay = (batch: ImportBatch) => {
+    if (batch.contentSha256 !== null && batch.contentSha256 !== contentSha256) throw keyReused('file');
+    return { status: 200, report: { ...batch.report, replayed: true } };
+  };
+  if (idempotencyKey && !input.dryRun) {
+    const earlier = await ImportBatch.findOne({ where: { userId, idempotencyKey }, transaction });
+    if (earlier) return replay(earlier);
   }
   const { report, rows } = await validateImport(input.text, transaction);
   if (!report.ok) return { status: 422, report };
@@ -135,14 +139,14 @@ export async function importObservations(ctx: Ctx, input: { text: string; fileNa
   const done: ImportReport = { ...report, imported: rows.length, batchId };
   try {
     await ImportBatch.create(
-      { id: batchId, idempotencyKey: input.idempotencyKey, userId, fileName: input.fileName, rowCount: rows.length, report: done },
+      { id: batchId, idempotencyKey, userId, fileName: input.fileName, rowCount: rows.length, report: done, contentSha256 },
       { transaction },
     );
   } catch (error) {
-    if (error instanceof UniqueConstraintError && input.idempotencyKey) {
+    if (error instanceof UniqueConstraintError && idempotencyKey) {
       // A locking read sees the twin's committed row, which this transaction's snapshot does not.
-      const twin = await ImportBatch.findOne({ where: { userId, idempotencyKey: input.idempotencyKey }, transaction, lock: transaction?.LOCK.SHARE });
-      if (twin) return { status: 200, report: { ...twin.report, replayed: true } };
+      const twin = await ImportBatch.findOne({ where: { userId, idempotencyKey }, transaction, lock: transaction?.LOCK.SHARE });
+      if (twin) return replay(twin);
     }
     throw error;
   }

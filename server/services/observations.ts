@@ -5,6 +5,8 @@ import type { HandlerContext } from '../http/route';
 import { programmeWritten } from '../http/write-events';
 import { Attachment, Observation, Programme, Recipe, User } from '../models';
 import { requireLiveProgramme } from './lookups';
+import { claimIdempotencyKey, idempotencyKeyOf, sha256 } from './idempotency';
+import { presentObservation } from '../presenters/observation';
 import { predictAdhoc } from './predictions';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -113,6 +115,24 @@ export async function createObservation(ctx: Ctx, input: ObservationInput) {
   await ctx.audit({ action: 'observation.created', entityType: 'observation', entityId: observation.id, details: { recipeId: fields.recipeId, state: input.observedState } });
   // Everything the answer shows is at hand: no need to read the new row back with its joins.
   return Object.assign(observation, { recipe, observer: ctx.user, attachments: [] }) as Awaited<ReturnType<typeof loadObservation>>;
+}
+
+/**
+ * POST /api/observations: records the observation, once per Idempotency-Key when one is sent
+ * (a retry after a lost answer gets the first answer back, marked with Idempotent-Replayed).
+ */
+export async function recordObservationOnce(ctx: Ctx, input: ObservationInput, keyHeader: string | undefined) {
+  const key = idempotencyKeyOf(keyHeader);
+  const claim = key
+    ? await claimIdempotencyKey({ userId: ctx.user!.id, scope: 'observation.create', key, requestSha256: sha256(JSON.stringify(input)), what: 'observation' }, ctx.transaction)
+    : null;
+  if (claim && 'replay' in claim) {
+    ctx.res.setHeader('Idempotent-Replayed', 'true');
+    return claim.replay;
+  }
+  const body = { observation: presentObservation(await createObservation(ctx, input)) };
+  if (claim) await claim.settle(201, body);
+  return { status: 201, body };
 }
 
 /** Before an upload is read: the observation exists and is the user's own (or the user is an administrator). */

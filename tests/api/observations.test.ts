@@ -153,6 +153,17 @@ describe('POST /api/observations/import', () => {
     expect(await Observation.count()).toBe(before + 1);
   });
 
+  it('answers 409 to an Idempotency-Key reused with a different file, importing nothing', async () => {
+    const key = `reuse-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const first = await scientist.post('/api/observations/import').set('Idempotency-Key', key).attach('file', csv([HEADER, [recipe.code, '2026-10-05', '5', 'gel', 'visual', '', '', '', 'first file']]), 'a.csv');
+    expect(first.status).toBe(201);
+    const before = await Observation.count();
+    const other = await scientist.post('/api/observations/import').set('Idempotency-Key', key).attach('file', csv([HEADER, [recipe.code, '2026-10-06', '6', 'fluid', 'visual', '', '', '', 'second file']]), 'b.csv');
+    expect(other.status).toBe(409);
+    expect(other.body.error.message).toMatch(/Idempotency-Key was used before for a different file/);
+    expect(await Observation.count()).toBe(before);
+  });
+
   it('stores formula-looking cells as text and escapes them again on export', async () => {
     const formula = '=HYPERLINK("http://evil.example","click")';
     const response = await scientist.post('/api/observations/import').attach('file', Buffer.from(`${HEADER.join(',')}\n${recipe.code},2026-10-04,4,gel,visual,,,,"${formula.replace(/"/g, '""')}"\n`), 'f.csv');
@@ -178,5 +189,50 @@ describe('POST /api/observations/import', () => {
     expect(missing.body.report.problems.map((p: { column: string }) => p.column)).toEqual(['mixed_on', 'observed_state', 'method']);
     const viewer = await signedInAgent(stack.app, await buildUser({ role: 'viewer' }));
     expect((await viewer.post('/api/observations/import').attach('file', csv([HEADER]), 'v.csv')).status).toBe(403);
+  });
+});
+
+describe('POST /api/observations with an Idempotency-Key', () => {
+  it('records once: a retry with the same key and body gets the first answer back, marked as replayed', async () => {
+    const key = `one-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const before = await Observation.count();
+    const first = await scientist.post('/api/observations').set('Idempotency-Key', key).send(observation({ notes: 'retried once' }));
+    const again = await scientist.post('/api/observations').set('Idempotency-Key', key).send(observation({ notes: 'retried once' }));
+    expect(first.status).toBe(201);
+    expect(again.status).toBe(201);
+    expect(again.headers['idempotent-replayed']).toBe('true');
+    expect(again.body.observation.id).toBe(first.body.observation.id);
+    expect(await Observation.count()).toBe(before + 1);
+  });
+
+  it('records once when three requests with one key race', async () => {
+    const key = `race-one-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const before = await Observation.count();
+    const answers = await Promise.all([1, 2, 3].map(() => scientist.post('/api/observations').set('Idempotency-Key', key).send(observation({ notes: 'raced' }))));
+    expect(answers.map((a) => a.status)).toEqual([201, 201, 201]);
+    expect(new Set(answers.map((a) => a.body.observation.id)).size).toBe(1);
+    expect(await Observation.count()).toBe(before + 1);
+  });
+
+  it('answers 409 to the same key with a different body, and 400 to a malformed key; neither writes', async () => {
+    const key = `body-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    expect((await scientist.post('/api/observations').set('Idempotency-Key', key).send(observation({ ageDays: 3 }))).status).toBe(201);
+    const before = await Observation.count();
+    const changed = await scientist.post('/api/observations').set('Idempotency-Key', key).send(observation({ ageDays: 4 }));
+    expect(changed.status).toBe(409);
+    expect(changed.body.error.field).toBe('Idempotency-Key');
+    const bad = await scientist.post('/api/observations').set('Idempotency-Key', 'no spaces allowed').send(observation());
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.field).toBe('Idempotency-Key');
+    expect(await Observation.count()).toBe(before);
+  });
+
+  it('keys belong to their user: another scientist with the same key records their own observation', async () => {
+    const key = `shared-${Date.now()}-${Math.random().toString(36).slice(2)}`;
+    const colleague = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
+    const mine = await scientist.post('/api/observations').set('Idempotency-Key', key).send(observation());
+    const theirs = await colleague.post('/api/observations').set('Idempotency-Key', key).send(observation());
+    expect(theirs.status).toBe(201);
+    expect(theirs.body.observation.id).not.toBe(mine.body.observation.id);
   });
 });

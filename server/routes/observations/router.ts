@@ -9,7 +9,7 @@ import { presentObservation } from '../../presenters/observation';
 import { attachmentUpload, csvUpload, sniff, storeBytes } from '../../services/attachments';
 import { escapeCell } from '../../services/csv-cells';
 import { importObservations } from '../../services/observation-import';
-import { archiveObservation, createObservation, loadObservation, lockOwnObservation, observationIncludes, observationWhere, requireOwnObservation, updateObservation } from '../../services/observations';
+import { archiveObservation, recordObservationOnce, loadObservation, lockOwnObservation, observationIncludes, observationWhere, requireOwnObservation, updateObservation } from '../../services/observations';
 import { Attachment } from '../../models';
 import { presentAttachment } from '../../presenters/observation';
 
@@ -80,10 +80,10 @@ export const observationRoutes = [
     method: 'post',
     path: '/api/observations',
     access: 'observations.write',
-    summary: 'Record a bench outcome',
+    summary: 'Record a bench outcome (an Idempotency-Key makes a retry safe: same key, same answer)',
     body: observationInputSchema,
     async handler(ctx) {
-      return { status: 201, body: { observation: presentObservation(await createObservation(ctx, ctx.body)) } };
+      return recordObservationOnce(ctx, ctx.body, ctx.req.get('Idempotency-Key'));
     },
   }),
   route({
