@@ -53,6 +53,14 @@ export { baxterPYPressure } from './fluid-fluid/baxter-py-pressure';
 export { baxterPYChemicalPotential } from './fluid-fluid/baxter-py-chemical-potential';
 export { baxterPYBinodal, BAXTER_MIN_TAU } from './fluid-fluid/baxter-py-binodal';
 
+// Arrest: mode-coupling theory with Percus–Yevick structure factors
+export { percusYevickHardSphereStructureFactor } from './arrest/percus-yevick-hard-sphere-structure-factor';
+export { baxterStickyStructureFactor } from './arrest/baxter-sticky-structure-factor';
+export { modeCouplingNonergodicity, type NonergodicityResult, type NonergodicityOptions } from './arrest/mode-coupling-nonergodicity';
+export { modeCouplingGlassTransition, type GlassTransition, type GlassTransitionOptions } from './arrest/mode-coupling-glass-transition';
+export { modeCouplingGlassLine, clearModeCouplingGlassLines, GLASS_LINE_LEVELS, GLASS_LINE_TAU_RANGE, type ModeCouplingGlassLine } from './arrest/mode-coupling-glass-line';
+export { DEFAULT_MODE_COUPLING_GRID } from './arrest/mode-coupling-grid';
+
 // Depletion: free-volume theory
 export { freeVolumeFraction } from './depletion/free-volume-fraction';
 export { freeVolumeCriticalPoint, type FreeVolumeCriticalPoint } from './depletion/free-volume-critical-point';

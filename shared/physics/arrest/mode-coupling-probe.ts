@@ -1,0 +1,71 @@
+import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
+import type { ModeCouplingGrid } from './mode-coupling-grid';
+import { structureFactorUnchecked } from './baxter-sticky-structure-factor';
+import { memoryScratch, modeCouplingMemory } from './mode-coupling-memory';
+import { modeCouplingVertex } from './mode-coupling-vertex';
+
+/**
+ * One state probed for arrest: whether it is arrested and, if so, g = (1 − E)², where E is the
+ * largest eigenvalue of the iteration's stability matrix, read off the geometric convergence of
+ * the iterates (E = ratio of successive largest changes). Near an A2 (fold) transition
+ * 1 − E ∝ √(φ − φ_c), so g is linear in φ − φ_c and extrapolates to the transition
+ * (W. Götze, in Liquids, Freezing and Glass Transition (1991): the square-root law). Internal.
+ */
+export interface ArrestProbe {
+  readonly arrested: boolean;
+  readonly g: number;
+  readonly iterations: number;
+}
+
+/** The ratio has settled when it moves by less than this between two iterations. */
+const RATE_SETTLED = 2e-5;
+/** Arrest is certain once the geometric tail of the remaining steps is this small a part of max f. */
+const TAIL_SHARE = 0.05;
+const DECAYED = 1e-4;
+/**
+ * States with S(0) above this (more compressible than an ideal gas: near the critical point or
+ * the spinodal) are not probed: there idealised MCT arrests on long-wavelength fluctuations, an
+ * artefact of feeding a critical S(k) to a theory of caging; the fluid–fluid lines decide those
+ * states (gel inside the spinodal).
+ */
+export const LONG_WAVELENGTH_LIMIT = 1;
+const MAX_ITERATIONS = 20_000;
+
+/**
+ * Iterate f ← m[f]/(1 + m[f]) from f = 1 until the state is decided: ergodic when every f_q
+ * falls below 1e-4; arrested once the convergence ratio r has settled below 1 and the geometric
+ * tail change·r/(1 − r) cannot bring max f near zero. `null` where Percus–Yevick has no solution
+ * or S(0) exceeds LONG_WAVELENGTH_LIMIT.
+ */
+export function probeArrest(phi: number, tau: number, grid: ModeCouplingGrid): ArrestProbe | null {
+  const lambda = tau === Infinity ? 0 : baxterLambdaUnchecked(phi, tau);
+  if (lambda === null || structureFactorUnchecked(phi, lambda, 0) > LONG_WAVELENGTH_LIMIT) return null;
+  const vertex = modeCouplingVertex(phi, lambda, grid);
+  const n = grid.points;
+  const f = new Float64Array(n).fill(1);
+  const m = new Float64Array(n);
+  const scratch = memoryScratch(n);
+  let previousChange = NaN;
+  let previousRate = NaN;
+  for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration++) {
+    modeCouplingMemory(vertex, f, m, scratch);
+    let change = 0;
+    let largest = 0;
+    for (let i = 0; i < n; i++) {
+      const next = m[i] / (1 + m[i]);
+      const step = f[i] - next;
+      if (step > change) change = step;
+      if (next > largest) largest = next;
+      f[i] = next;
+    }
+    if (largest < DECAYED) return { arrested: false, g: NaN, iterations: iteration };
+    const rate = change / previousChange;
+    if (change === 0) return { arrested: true, g: 1, iterations: iteration };
+    if (iteration > 8 && rate < 1 && Math.abs(rate - previousRate) < RATE_SETTLED && (change * rate) / (1 - rate) < TAIL_SHARE * largest) {
+      return { arrested: true, g: (1 - rate) * (1 - rate), iterations: iteration };
+    }
+    previousChange = change;
+    previousRate = rate;
+  }
+  return { arrested: true, g: 0, iterations: MAX_ITERATIONS };
+}
