@@ -35,6 +35,12 @@ export function createApp(deps: AppDeps, options: CreateAppOptions = {}): Expres
   app.use('/api', express.json({ limit: LIMITS.jsonBodyBytes, strict: true, type: 'application/json' }));
   app.use('/api', cookieParser());
   app.use('/api', sameOriginWrites(deps.config));
+  // API answers hold team data: never kept by a browser or proxy cache unless a route says
+  // otherwise (the map overlay revalidates with its ETag; attachments are files).
+  app.use('/api', (_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
 
   mountRoutes(app, ALL_ROUTES, deps, createLimiters(deps.config));
   app.use('/api', (_req, _res, next) => next(notFound('API route')));

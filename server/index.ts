@@ -3,6 +3,7 @@ import { loadConfig, type Config } from './config';
 import { createApp } from './app';
 import { createSequelize } from './db';
 import { startMailCatcher, type MailCatcher } from './mail/catcher';
+import { catcherCredentials } from './mail/catcher-credentials';
 import { createMailer, storeCaughtMail } from './mail/mailer';
 import { migrateUp } from './migrator';
 
@@ -27,6 +28,7 @@ export async function startGelwright(config: Config, options: { clientDir?: stri
       host: '127.0.0.1',
       store: storeCaughtMail,
       onError: (error) => console.warn(`mail catcher: ${error.message}`),
+      credentials: catcherCredentials(config),
     });
   }
   const mailer = createMailer(config);

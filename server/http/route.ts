@@ -10,7 +10,7 @@ import type { AuditInput } from '../services/audit';
 /** Who may call a route: anyone, any signed-in user, or the roles holding a capability. */
 export type Access = 'public' | 'signedIn' | Capability;
 
-export type LimiterName = 'signInByAddress' | 'signInByAccount' | 'mailByAddress' | 'mailByAccount' | 'writes';
+export type LimiterName = 'signInByAddress' | 'signInBackoff' | 'mailByAddress' | 'mailByAccount' | 'writes';
 
 export interface AppDeps {
   config: Config;

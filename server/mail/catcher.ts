@@ -1,6 +1,7 @@
 import { SMTPServer } from 'smtp-server';
 import { simpleParser, type ParsedMail } from 'mailparser';
 import type { AddressInfo } from 'node:net';
+import { timingSafeEqual } from 'node:crypto';
 
 export interface CaughtMail {
   messageId: string | null;
@@ -16,9 +17,15 @@ export interface MailCatcher {
   close: () => Promise<void>;
 }
 
+const same = (a: string, b: string) => {
+  const x = Buffer.from(a);
+  const y = Buffer.from(b);
+  return x.length === y.length && timingSafeEqual(x, y);
+};
+
 /**
- * A local stand-in for a mail relay: an SMTP server on loopback that accepts every
- * message and hands it, parsed, to `store`. The message is acknowledged to the sender
+ * A local stand-in for a mail relay: an SMTP server on loopback that accepts messages only
+ * from a client that signs in with `credentials` (the app's own), and hands each, parsed, to `store`. The message is acknowledged to the sender
  * only after `store` resolves, so once sendMail() returns the message is in the outbox.
  * STARTTLS is disabled because the package's built-in certificate has expired; loopback only.
  */
@@ -27,10 +34,19 @@ export async function startMailCatcher(options: {
   host?: string;
   store: (mail: CaughtMail) => Promise<void>;
   onError?: (error: Error) => void;
+  credentials: { user: string; pass: string };
 }): Promise<MailCatcher> {
   const server = new SMTPServer({
     disabledCommands: ['STARTTLS'],
-    authOptional: true,
+    authOptional: false,
+    authMethods: ['PLAIN', 'LOGIN'],
+    // Plain-text sign-in without TLS: the catcher listens on loopback only.
+    allowInsecureAuth: true,
+    onAuth(auth, _session, callback) {
+      const ok = same(auth.username ?? '', options.credentials.user) && same(auth.password ?? '', options.credentials.pass);
+      if (!ok) return callback(Object.assign(new Error('Wrong mail catcher credentials'), { responseCode: 535 }));
+      callback(null, { user: auth.username });
+    },
     logger: false,
     banner: 'Gelwright mail catcher',
     size: 5 * 1024 * 1024,

@@ -1,6 +1,7 @@
 import nodemailer from 'nodemailer';
 import type { Config } from '../config';
 import { OutboxMessage } from '../models';
+import { catcherCredentials } from './catcher-credentials';
 
 export interface MailMessage {
   to: string[];
@@ -24,7 +25,7 @@ export function createMailer(config: Config): Mailer {
     port: config.SMTP_PORT,
     secure: config.SMTP_SECURE,
     ignoreTLS: config.MAIL_CATCHER,
-    auth: config.SMTP_USER ? { user: config.SMTP_USER, pass: config.SMTP_PASSWORD ?? '' } : undefined,
+    auth: config.MAIL_CATCHER ? catcherCredentials(config) : config.SMTP_USER ? { user: config.SMTP_USER, pass: config.SMTP_PASSWORD ?? '' } : undefined,
     connectionTimeout: 5000,
     greetingTimeout: 5000,
     socketTimeout: 10_000,

@@ -103,7 +103,7 @@ export async function transitionShortlist(ctx: Ctx, id: number, to: ShortlistSta
   if (to === 'submitted' || to === 'draft') requireAuthorOrAdmin(ctx, shortlist);
   if (to === 'approved' || to === 'returned') {
     if (!can(actor.role, 'shortlists.decide')) throw forbidden();
-    if (to === 'approved' && shortlist.authorId === actor.id) throw forbidden('You cannot approve a shortlist you wrote; another manager must decide');
+    if (shortlist.authorId === actor.id) throw forbidden(`You cannot ${to === 'approved' ? 'approve' : 'return'} a shortlist you wrote; another manager must decide`);
   }
   if (to === 'submitted') await snapshotItems(id, ctx.transaction);
   if (to === 'draft') await ShortlistItem.update({ snapshot: null }, { where: { shortlistId: id }, transaction: ctx.transaction });

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { CALIBRATION_PARAMETERS } from '../calibration/types';
 import { LIMITS } from '../limits';
-import { optionalText } from './common';
+import { decimalId, optionalText } from './common';
 
 /** Cross-validation folds a fit may use (capped further by the smaller outcome count). */
 export const CALIBRATION_FOLDS = { min: 2, max: 20, default: 5 } as const;
@@ -26,8 +26,7 @@ export const calibrationFitSchema = z
   .strict();
 export type CalibrationFitInput = z.infer<typeof calibrationFitSchema>;
 
-const positiveId = (label: string) =>
-  z.coerce.number({ error: `${label} must be a number` }).int(`${label} must be a whole number`).positive(`${label} must be positive`);
+const positiveId = decimalId;
 
 export const programmeIdParamSchema = z.object({ id: positiveId('id') });
 export const calibrationParamSchema = z.object({ id: positiveId('id'), calibrationId: positiveId('calibrationId') });

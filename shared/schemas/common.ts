@@ -21,9 +21,20 @@ export const newPasswordSchema = z
     message: `Password must be at most ${LIMITS.passwordMaxBytes} bytes`,
   });
 
-export const idParamSchema = z.object({
-  id: z.coerce.number({ error: 'id must be a number' }).int('id must be a whole number').positive('id must be positive'),
-});
+/**
+ * A record id in a path or query string: decimal digits only (no 0x10, 1e3, +5 or spaces, which
+ * Number() would accept), as a positive whole number.
+ */
+export const decimalId = (label: string) =>
+  z.union([
+    z.number({ error: `${label} must be a number` }).int(`${label} must be a whole number`).positive(`${label} must be positive`),
+    z
+      .string({ error: `${label} must be a number` })
+      .regex(/^[1-9][0-9]{0,14}$/, `${label} must be a positive whole number in decimal digits`)
+      .transform(Number),
+  ], { error: `${label} must be a positive whole number in decimal digits` });
+
+export const idParamSchema = z.object({ id: decimalId('id') });
 
 export const pageQuerySchema = z.object({
   page: z.coerce.number().int().min(1, 'page starts at 1').default(1),

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
 import { OBSERVATION_METHODS, OBSERVED_STATES } from '../states';
-import { boundedNumber, idSchema, optionalText, pageQuerySchema } from './common';
+import { decimalId, boundedNumber, idSchema, optionalText, pageQuerySchema } from './common';
 
 const isoDate = z
   .string({ error: 'Mixing date is required' })
@@ -42,8 +42,8 @@ export const observationInputSchema = z
 export type ObservationInput = z.infer<typeof observationInputSchema>;
 
 export const observationListQuerySchema = pageQuerySchema.extend({
-  programme: z.coerce.number().int().positive().optional(),
-  recipe: z.coerce.number().int().positive().optional(),
+  programme: decimalId('programme').optional(),
+  recipe: decimalId('recipe').optional(),
   state: z.enum(OBSERVED_STATES).optional(),
   method: z.enum(OBSERVATION_METHODS).optional(),
   disagreeing: z.enum(['true', 'false']).optional(),

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
 import { GOAL_STATES } from '../states';
-import { boundedNumber, idSchema, optionalPrice, optionalText, pageQuerySchema, requiredText } from './common';
+import { decimalId, boundedNumber, idSchema, optionalPrice, optionalText, pageQuerySchema, requiredText } from './common';
 
 /** Most candidates and next experiments one plan lists. */
 export const PLAN_LIMITS = { candidates: 30, experiments: 12, defaultCandidates: 10, defaultExperiments: 4 } as const;
@@ -83,6 +83,6 @@ export const planExperimentRecipesSchema = z
 export type PlanExperimentRecipesInput = z.infer<typeof planExperimentRecipesSchema>;
 
 export const planListQuerySchema = pageQuerySchema.extend({
-  programme: z.coerce.number({ error: 'programme must be a programme id' }).int().positive('programme must be a programme id'),
+  programme: decimalId('programme'),
 });
 export type PlanListQuery = z.infer<typeof planListQuerySchema>;

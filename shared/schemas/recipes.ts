@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
 import { PREDICTED_STATES } from '../states';
-import { boundedNumber, idSchema, optionalText, pageQuerySchema, requiredText } from './common';
+import { decimalId, boundedNumber, idSchema, optionalText, pageQuerySchema, requiredText } from './common';
 
 /** What makes the particles stick, one source per recipe. */
 export const recipeAttractionSchema = z.discriminatedUnion(
@@ -51,7 +51,7 @@ export type RecipeInput = z.infer<typeof recipeInputSchema>;
 export const RECIPE_SORTS = ['code', 'name', 'phi', 'margin', 'updatedAt', 'predictedState'] as const;
 
 export const recipeListQuerySchema = pageQuerySchema.extend({
-  programme: z.coerce.number().int().positive().optional(),
+  programme: decimalId('programme').optional(),
   state: z.enum(PREDICTED_STATES).optional(),
   q: z.string().trim().max(120).optional(),
   archived: z.enum(['true', 'false', 'all']).default('false'),

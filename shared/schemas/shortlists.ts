@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
 import { GOAL_STATES, SHORTLIST_STATUSES } from '../states';
-import { idSchema, optionalText, pageQuerySchema, requiredText } from './common';
+import { decimalId, idSchema, optionalText, pageQuerySchema, requiredText } from './common';
 
 export const shortlistItemSchema = z.object({
   recipeId: idSchema('Recipe'),
@@ -30,6 +30,6 @@ export const shortlistReturnSchema = z
   .strict();
 
 export const shortlistListQuerySchema = pageQuerySchema.extend({
-  programme: z.coerce.number().int().positive().optional(),
+  programme: decimalId('programme').optional(),
   status: z.enum(SHORTLIST_STATUSES).optional(),
 });

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ROLES } from '../roles';
-import { emailSchema, pageQuerySchema, personNameSchema } from './common';
+import { decimalId, emailSchema, pageQuerySchema, personNameSchema } from './common';
 
 export const roleSchema = z.enum(ROLES, { error: `role must be one of ${ROLES.join(', ')}` });
 
@@ -27,7 +27,7 @@ export type UpdateUserInput = z.infer<typeof updateUserSchema>;
 
 export const auditQuerySchema = pageQuerySchema.extend({
   action: z.string().max(64).optional(),
-  actorId: z.coerce.number().int().positive().optional(),
+  actorId: decimalId('actorId').optional(),
 });
 
 export const outboxQuerySchema = pageQuerySchema.extend({

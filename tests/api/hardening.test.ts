@@ -1,7 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import nodemailer from 'nodemailer';
+import { OutboxMessage } from '../../server/models';
+import { catcherCredentials } from '../../server/mail/catcher-credentials';
 import { cachedMapPoints } from '../../server/services/map-points';
 import type { Programme } from '../../server/models';
-import { buildUser, signedInAgent } from '../support/builders';
+import { buildUser, latestMailTo, signedInAgent, uniqueEmail } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
 import { tableCounts } from '../support/table-counts';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -111,5 +114,67 @@ describe('archived programmes take nothing new', () => {
     expect(response.body.error.field).toBe('programmeId');
     expect(response.body.error.message).toMatch(/archived/);
     expect(await tableCounts(stack.sequelize)).toEqual(before);
+  });
+});
+
+describe('Cache-Control on API answers', () => {
+  it('GET /api/recipes, /api/users and an error answer carry Cache-Control: no-store', async () => {
+    expect((await formulator.get('/api/recipes')).headers['cache-control']).toBe('no-store');
+    expect((await admin.get('/api/users')).headers['cache-control']).toBe('no-store');
+    expect((await formulator.get('/api/recipes/999999999')).headers['cache-control']).toBe('no-store');
+  });
+});
+
+describe('no self-review', () => {
+  it('POST /api/shortlists/:id/return by its own author (an administrator) is 403; another manager may', async () => {
+    const programme = await buildProgramme();
+    const recipe = await recipeIn(programme);
+    const created = await admin.post('/api/shortlists').send({ programmeId: programme.id, title: 'Mine', targetState: 'gel', items: [{ recipeId: recipe.id, reason: 'x' }] });
+    await admin.post(`/api/shortlists/${created.body.shortlist.id}/submit`);
+    const self = await admin.post(`/api/shortlists/${created.body.shortlist.id}/return`).send({ comment: 'back to me' });
+    expect(self.status).toBe(403);
+    expect(self.body.error.message).toMatch(/cannot return a shortlist you wrote/);
+    const manager = await signedInAgent(stack.app, await buildUser({ role: 'manager' }));
+    expect((await manager.post(`/api/shortlists/${created.body.shortlist.id}/return`).send({ comment: 'needs a control' })).status).toBe(200);
+  });
+});
+
+describe('ids are decimal', () => {
+  it.each(['0x10', '1e1', '+5', ' 7', '010', '1.0'])('GET /api/recipes/%s is 400 naming id', async (id) => {
+    const response = await formulator.get(`/api/recipes/${encodeURIComponent(id)}`);
+    expect(response.status).toBe(400);
+    expect(response.body.error.field).toBe('id');
+  });
+
+  it('a query id such as programme=0x10 is 400 naming programme; a decimal one works', async () => {
+    const hex = await formulator.get('/api/recipes?programme=0x10');
+    expect(hex.status).toBe(400);
+    expect(hex.body.error.field).toBe('programme');
+    const programme = await buildProgramme();
+    await recipeIn(programme);
+    const decimal = await formulator.get(`/api/recipes?programme=${programme.id}`);
+    expect(decimal.status).toBe(200);
+    expect(decimal.body.total).toBe(1);
+  });
+});
+
+describe('the local mail catcher', () => {
+  const send = (auth?: { user: string; pass: string }) =>
+    nodemailer
+      .createTransport({ host: '127.0.0.1', port: stack.config.SMTP_PORT, secure: false, ignoreTLS: true, auth })
+      .sendMail({ from: 'someone@localhost', to: uniqueEmail('target'), subject: `planted ${Math.random()}`, text: 'x' });
+
+  it('refuses mail from a client without the app’s credentials, or with wrong ones, and files nothing', async () => {
+    const before = await OutboxMessage.count();
+    await expect(send()).rejects.toThrow();
+    await expect(send({ user: 'gelwright', pass: 'a-guess' })).rejects.toThrow();
+    expect(await OutboxMessage.count()).toBe(before);
+  });
+
+  it('accepts the app’s own mail (the mailer signs in with the installation’s credentials)', async () => {
+    const email = uniqueEmail('delivered');
+    await stack.mailer.send({ to: [email], subject: 'Catcher check', text: 'hello' });
+    expect((await latestMailTo(email))?.subject).toBe('Catcher check');
+    await expect(send(catcherCredentials(stack.config))).resolves.toBeTruthy();
   });
 });

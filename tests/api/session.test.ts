@@ -63,17 +63,24 @@ describe('POST /api/session', () => {
 });
 
 describe('sign-in rate limits', () => {
-  it('locks an account after 5 failed sign-ins even with the right password next, and leaves other accounts alone', async () => {
+  it('after 5 failed sign-ins from one address, that address waits (1 s, then 2 s …) while the owner signs in from another at once', async () => {
+    const app = stack.appWith({ TRUST_PROXY: 'true' });
     const who = await buildUser({ role: 'formulator' });
-    const other = await buildUser({ role: 'formulator' });
-    for (let i = 0; i < 5; i++) {
-      const r = await request(stack.app).post('/api/session').send({ email: who.email, password: `wrong-${i}` });
-      expect(r.status).toBe(401);
-    }
-    const locked = await request(stack.app).post('/api/session').send({ email: who.email, password: who.password });
-    expect(locked.status).toBe(429);
-    const fine = await request(stack.app).post('/api/session').send({ email: other.email, password: other.password });
-    expect(fine.status).toBe(201);
+    const fromGuesser = () => request(app).post('/api/session').set('X-Forwarded-For', '203.0.113.7');
+    for (let i = 0; i < 5; i++) expect((await fromGuesser().send({ email: who.email, password: `wrong-${i}` })).status).toBe(401);
+    const slowed = await fromGuesser().send({ email: who.email, password: `wrong-again` });
+    expect(slowed.status).toBe(429);
+    expect(slowed.body.error.message).toMatch(/wait 1 s/);
+    expect(slowed.headers['retry-after']).toBe('1');
+    // The owner, elsewhere, is not locked out.
+    const owner = await request(app).post('/api/session').set('X-Forwarded-For', '198.51.100.20').send({ email: who.email, password: who.password });
+    expect(owner.status).toBe(201);
+    // After the wait the guesser may try once more, and a failure doubles the wait.
+    await new Promise((done) => setTimeout(done, 1100));
+    expect((await fromGuesser().send({ email: who.email, password: 'wrong-6' })).status).toBe(401);
+    const doubled = await fromGuesser().send({ email: who.email, password: 'wrong-7' });
+    expect(doubled.status).toBe(429);
+    expect(doubled.body.error.message).toMatch(/wait 2 s/);
   });
 
   it('limits failed sign-ins per address across many accounts, the same for unknown e-mails', async () => {

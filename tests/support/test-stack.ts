@@ -8,6 +8,7 @@ import { loadConfig, type Config } from '../../server/config';
 import { createSequelize } from '../../server/db';
 import { startMailCatcher, type MailCatcher } from '../../server/mail/catcher';
 import { createMailer, storeCaughtMail, type Mailer } from '../../server/mail/mailer';
+import { catcherCredentials } from '../../server/mail/catcher-credentials';
 
 export interface TestStack {
   app: Express;
@@ -28,7 +29,6 @@ export interface TestStack {
  * One stack per test file: the models bind to one Sequelize instance per process.
  */
 export async function startTestStack(options: { listen?: boolean; env?: Record<string, string> } = {}): Promise<TestStack> {
-  const catcher: MailCatcher = await startMailCatcher({ port: 0, store: storeCaughtMail, onError: (e) => console.warn(`catcher: ${e.message}`) });
   let server: Server | null = null;
   let url = 'http://127.0.0.1:4199';
   if (options.listen) {
@@ -37,6 +37,12 @@ export async function startTestStack(options: { listen?: boolean; env?: Record<s
     await new Promise<void>((done) => server!.listen(0, '127.0.0.1', () => done()));
     url = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
   }
+  const catcher: MailCatcher = await startMailCatcher({
+    port: 0,
+    store: storeCaughtMail,
+    onError: (e) => console.warn(`catcher: ${e.message}`),
+    credentials: catcherCredentials(loadConfig({ ...process.env, PUBLIC_URL: url, ...options.env })),
+  });
   const config = loadConfig({ ...process.env, PUBLIC_URL: url, SMTP_PORT: String(catcher.port), ...options.env });
   const sequelize = createSequelize(config);
   const mailer = createMailer(config);

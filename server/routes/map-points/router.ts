@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { route } from '../../http/route';
 import { badRequest } from '../../errors';
 import { cachedMapPoints } from '../../services/map-points';
+import { decimalId } from '../../../shared/schemas/common';
 
 /**
  * Everything the map overlays for a programme in one call, as columns + rows so that 10,000
@@ -13,7 +14,7 @@ export const mapPointRoutes = [
     path: '/api/map-points',
     access: 'data.read',
     summary: "A programme's recipes and observations in every map coordinate",
-    query: z.object({ programme: z.coerce.number({ error: 'programme must be a programme id' }).int().positive() }),
+    query: z.object({ programme: decimalId('programme') }),
     async handler({ query, deps, req, res }) {
       const points = await cachedMapPoints(deps.sequelize, query.programme);
       if (!points) throw badRequest('programmeId: no such programme', 'programmeId');

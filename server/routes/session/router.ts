@@ -16,7 +16,7 @@ export const sessionRoutes = [
     path: '/api/session',
     access: 'public',
     summary: 'Sign in with e-mail and password',
-    limiters: ['signInByAddress', 'signInByAccount'],
+    limiters: ['signInByAddress', 'signInBackoff'],
     body: signInSchema,
     // The failed-sign-in audit event must survive the refusal, so no surrounding transaction.
     transactional: false,
