@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { PhysicsArgumentError } from './physics';
+import { highestGlassPhi, PhysicsArgumentError, SHORT_RANGE_LIMIT, type StateMap } from './physics';
 import { deriveRecipe, recipeFieldOf, recipeStateMap, type RecipeMaterials } from './recipe-derivation';
 import type { RecipeInput } from './schemas/recipes';
 import { PREDICTED_STATES } from './states';
@@ -42,11 +42,13 @@ function leaves(value: unknown, path = '', into: Array<[string, unknown]> = []):
 function sweepProblems(recipe: RecipeInput, materials: RecipeMaterials): string[] {
   const label = JSON.stringify({ radiusNm: materials.particle.radiusNm, phi: recipe.fraction.value, attraction: recipe.attraction });
   try {
-    const derived = deriveRecipe(recipe, materials, { map: recipeStateMap(recipe, materials) });
+    const map = recipeStateMap(recipe, materials);
+    const derived = deriveRecipe(recipe, materials, { map });
     const problems = leaves(derived)
       .filter(([, value]) => (typeof value === 'number' && !Number.isFinite(value)) || (typeof value === 'string' && /NaN|Infinity/.test(value)))
       .map(([path, value]) => `${label}: ${path} = ${String(value)}`);
     if (!PREDICTED_STATES.includes(derived.predictedState!)) problems.push(`${label}: state ${derived.predictedState}`);
+    problems.push(...ruleProblems(label, derived, map));
     return problems;
   } catch (error) {
     if (!(error instanceof PhysicsArgumentError)) return [`${label}: ${(error as Error).message}`];
@@ -54,6 +56,26 @@ function sweepProblems(recipe: RecipeInput, materials: RecipeMaterials): string[
     const plain = RECIPE_FIELDS.includes(field) && !/NaN|Infinity/.test(error.message);
     return plain ? [] : [`${label}: ${field}: ${error.message}`];
   }
+}
+
+/**
+ * The state rule's promises (physics.md §5, issue of the arrest lines): a glass only at or beyond
+ * the glass line, a gel only below it; dilute, strongly attractive short-range depletion gels
+ * (arrested spinodal decomposition, Lu et al., Nature 453, 499 (2008)), never a glass; long-range
+ * depletion (q > 0.25) has no attractive glass, so no glass below the hard-sphere line.
+ */
+function ruleProblems(label: string, derived: ReturnType<typeof deriveRecipe>, map: StateMap): string[] {
+  const problems: string[] = [];
+  const phi = derived.phi!;
+  const glass = map.tables.glass.phi;
+  if (derived.predictedState === 'glass' && phi < Math.min(...glass) - 1e-9) problems.push(`${label}: glass below the glass line`);
+  if (derived.predictedState === 'gel' && phi >= highestGlassPhi(map)) problems.push(`${label}: gel above the glass line`);
+  const q = derived.sizeRatio;
+  if (q !== null && q <= SHORT_RANGE_LIMIT && derived.contactEnergyKT !== null && derived.contactEnergyKT >= 10 && phi <= 0.15 && derived.predictedState !== 'gel') {
+    problems.push(`${label}: dilute strong short-range depletion predicted ${derived.predictedState}, not gel`);
+  }
+  if (q !== null && q > SHORT_RANGE_LIMIT && derived.predictedState === 'glass' && phi < 0.58) problems.push(`${label}: long-range depletion called glass below φ = 0.58`);
+  return problems;
 }
 
 describe('deriveRecipe over realistic recipe grids', () => {

@@ -1,4 +1,4 @@
-import { buildStateMap, type ClassifierParameters, type MapModel, type StateMap, type StateMapOptions } from './physics';
+import { buildStateMap, type ClassifierParameters, type GlassLineMapping, type MapModel, type StateMap, type StateMapOptions } from './physics';
 
 const CACHE_SIZE = 64;
 const maps = new Map<string, StateMap>();
@@ -8,11 +8,12 @@ const maps = new Map<string, StateMap>();
  * programme share a few maps, so saving, re-predicting and live previews stay fast
  * (a map takes 10–100 ms to build; a lookup microseconds).
  */
-export function cachedStateMap(model: MapModel, options: { parameters?: Partial<ClassifierParameters>; polydispersity?: number; yMax?: number } = {}): StateMap {
+export function cachedStateMap(model: MapModel, options: { parameters?: Partial<ClassifierParameters>; polydispersity?: number; yMax?: number; glassLine?: GlassLineMapping } = {}): StateMap {
   const clean: StateMapOptions = {};
   if (options.parameters) clean.parameters = options.parameters;
   if (options.polydispersity !== undefined) clean.polydispersity = options.polydispersity;
   if (options.yMax !== undefined) clean.yMax = options.yMax;
+  if (options.glassLine !== undefined && options.glassLine !== 'rescaled') clean.glassLine = options.glassLine;
   const key = JSON.stringify([model, clean]);
   const hit = maps.get(key);
   if (hit) {

@@ -1,4 +1,4 @@
-import type { StateMap } from '../physics';
+import { highestGlassPhi, type StateMap } from '../physics';
 import { gelOnset } from './gel-onset';
 import type { GelOnset } from './types';
 
@@ -11,7 +11,7 @@ import type { GelOnset } from './types';
 export function gelOnsetProfile(map: StateMap, samples = 120, tolerance = 1e-4): { phi: number; onset: GelOnset }[] {
   if (!Number.isInteger(samples) || samples < 2) throw new Error(`gelOnsetProfile: samples must be a whole number of 2 or more, got ${samples}`);
   const first = 0.002;
-  const last = map.parameters.glassPhi - 1e-4;
+  const last = highestGlassPhi(map) - 1e-4;
   return Array.from({ length: samples }, (_, i) => {
     const phi = first + ((last - first) * i) / (samples - 1);
     return { phi, onset: gelOnset(map, phi, tolerance) };

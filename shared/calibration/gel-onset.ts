@@ -1,5 +1,5 @@
 import { bisect } from 'simple-statistics';
-import { classifyPoint, type StateMap } from '../physics';
+import { classifyPoint, highestGlassPhi, type StateMap } from '../physics';
 import { strongestReducedB2 } from './strongest-reduced-b2';
 import type { GelOnset } from './types';
 
@@ -22,11 +22,12 @@ export const ONSET_TOLERANCE = 1e-7;
  *
  * @param tolerance B2* to which each onset is located (default 1e-7; drawing needs far less)
  * @returns `{ spinodalB2, binodalB2 }`, each null when φ is outside that dome even at the
- *   strongest attraction searched, or at or above the glass line φ ≥ glassPhi (no gel there).
+ *   strongest attraction searched, or where the glass line comes first (φ at or above the
+ *   line's nose: no gel anywhere; beyond the attractive-glass line: no gel at that level).
  * @example gelOnset(meanFieldMap, 0.13).spinodalB2 // ≈ −1.65, the mean-field critical point
  */
 export function gelOnset(map: StateMap, phi: number, tolerance = ONSET_TOLERANCE): GelOnset {
-  if (!(phi > 0) || phi >= map.parameters.glassPhi) return { spinodalB2: null, binodalB2: null };
+  if (!(phi > 0) || phi >= highestGlassPhi(map)) return { spinodalB2: null, binodalB2: null };
   const lowest = Math.max(ONSET_SEARCH_LOWEST_B2, strongestReducedB2(map));
   return { spinodalB2: entry(map, phi, -100, lowest, tolerance), binodalB2: entry(map, phi, 1, lowest, tolerance) };
 }

@@ -1,3 +1,4 @@
+import { highestGlassPhi } from '../physics';
 import { gelOnset } from './gel-onset';
 import { gelSideOutcome } from './gel-side-outcome';
 import { LEFT_OUT_REASONS, type CalibrationObservation, type CalibrationPoint, type LeftOutReason } from './types';
@@ -8,7 +9,7 @@ import { LEFT_OUT_REASONS, type CalibrationObservation, type CalibrationPoint, t
  * - `unclear`: the bench could not tell;
  * - `noAttraction`: no B2* (attraction beyond what the physics can represent) or no φ;
  * - `noMap`: the observation's recipe could not be placed on a map;
- * - `atGlass`: φ at or above the glass line (glassPhi), where the rule never predicts a gel;
+ * - `atGlass`: φ at or above the glass line's highest point, where the rule never predicts a gel;
  * - `outOfReach`: φ outside the binodal even at the strongest attraction, so no boundary to
  *   be on either side of.
  * Onsets are computed once per map and φ (observations of one recipe at several ages share them).
@@ -23,7 +24,7 @@ export function prepareCalibrationPoints(observations: CalibrationObservation[])
     const { phi, reducedB2, map } = observation;
     if (phi === null || reducedB2 === null || !Number.isFinite(phi) || !Number.isFinite(reducedB2)) { leftOut.noAttraction++; continue; }
     if (map === null) { leftOut.noMap++; continue; }
-    if (phi >= map.parameters.glassPhi) { leftOut.atGlass++; continue; }
+    if (phi >= highestGlassPhi(map)) { leftOut.atGlass++; continue; }
     let byPhi = onsets.get(map);
     if (!byPhi) onsets.set(map, (byPhi = new Map()));
     let onset = byPhi.get(phi);

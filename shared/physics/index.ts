@@ -100,6 +100,8 @@ export type {
   ClassifiedPoint,
   ClassifierParameters,
   ClassifierTables,
+  GlassLineMapping,
+  GlassLineSource,
   MapAxis,
   MapBoundary,
   MapMarker,
@@ -113,6 +115,7 @@ export type {
 export { DEFAULT_CLASSIFIER_PARAMETERS, resolveClassifierParameters } from './map/classifier-parameters';
 export { buildStateMap, SIMULATION_CRITICAL_POINT } from './map/build-state-map';
 export { DEFAULT_STRONGEST_B2 } from './map/build-axis';
+export { SHORT_RANGE_LIMIT, attractionRangeOfModel, highestGlassPhi } from './map/glass-line-table';
 export { DEFAULT_SQUARE_WELL_RANGE } from './map/resolve-map-model';
 export { classifyPoint } from './map/classify-point';
 export { PointClassification } from './map/point-classification';

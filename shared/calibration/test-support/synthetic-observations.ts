@@ -19,7 +19,8 @@ export function syntheticObservations(input: {
   firstId?: number;
 }): CalibrationObservation[] {
   const random = seededRandom(input.seed);
-  const [phiLow, phiHigh] = input.phi ?? [0.03, 0.53];
+  // Below the attractive-glass line (φ_g ≈ 0.40 at strong attraction), where gels can form.
+  const [phiLow, phiHigh] = input.phi ?? [0.03, 0.38];
   const [b2Low, b2High] = input.b2 ?? [-6, 0];
   return Array.from({ length: input.count }, (_, i) => {
     const phi = phiLow + (phiHigh - phiLow) * random();

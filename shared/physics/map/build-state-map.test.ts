@@ -118,8 +118,9 @@ describe('buildStateMap', () => {
   });
 
   it('flags the gas–liquid branches metastable below the critical endpoint and above the triple point', () => {
-    // q = 0.1 < q_cep: every binodal piece is metastable (physics.md §4: draw it dashed).
-    expect(pieces(depletionMap(0.1), 'binodal').every((piece) => piece.metastable)).toBe(true);
+    // q = 0.3 < q_cep (and above the short-range limit, so free-volume lines): every binodal piece
+    // is metastable (physics.md §4: draw it dashed).
+    expect(pieces(depletionMap(0.3), 'binodal').every((piece) => piece.metastable)).toBe(true);
     // q = 0.6 > q_cep, the triple point lies above this map's top: all stable.
     expect(pieces(depletionMap(0.6), 'binodal').every((piece) => !piece.metastable)).toBe(true);
     // Mean field: stable near the critical point, metastable above the triple point.
@@ -159,7 +160,8 @@ describe('buildStateMap', () => {
   });
 
   it('fills a region grid of the requested size with every state code', () => {
-    const map = cachedMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, { gridColumns: 50, gridRows: 40 });
+    // A gel threshold below the critical B2* (a calibration) leaves room for slow separation.
+    const map = cachedMap({ kind: 'generic', theory: 'meanField', axis: 'b2' }, { gridColumns: 50, gridRows: 40, parameters: { gelB2Threshold: -3 } });
     expect(map.regions.cells).toHaveLength(2000);
     expect(map.regions.codes).toEqual(['fluid', 'gel', 'glass', 'crystal', 'separated', 'crystal-suppressed']);
     for (const code of [0, 1, 2, 3, 4]) expect(map.regions.cells).toContain(code);

@@ -5,10 +5,11 @@ import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireInRange } from '../validation/require-in-range';
 import { buildAxis, depletionPolymerForB2, genericB2FromY, genericYFromB2 } from './build-axis';
-import { resolveClassifierParameters } from './classifier-parameters';
+import { DEFAULT_CLASSIFIER_PARAMETERS, resolveClassifierParameters } from './classifier-parameters';
+import { glassLineTable, SHORT_RANGE_LIMIT } from './glass-line-table';
 import { curveAt } from './state-rule';
 import { buildDrawnCurves, roundPoint, type DrawnCurve } from './drawn-curves';
-import { genericLevelPhysics, depletionLevelPhysics } from './level-physics';
+import { depletionLevelPhysics, genericLevelPhysics, shortRangeDepletionLevelPhysics } from './level-physics';
 import { createMapFrame, type MapFrame, type ReducedB2Table } from './map-frame';
 import { stateAtDrawnPoint } from './map-state-at';
 import { PHYSICS_MODEL_VERSION } from './model-version';
@@ -19,6 +20,7 @@ import { traceTheoryCurves, type TheoryCurves } from './theory-curves';
 import type {
   ClassifierParameters,
   ClassifierTables,
+  GlassLineSource,
   MapAxis,
   MapBoundary,
   MapMarker,
@@ -68,8 +70,10 @@ const CODE_OF_CAUSE: Record<StateCause, number> = {
  * generic/baxterPY — Percus–Yevick adhesive spheres (compressibility route; the dilute spinodal
  * branch is the edge of the no-solution band); both generic theories take their fluid–crystal
  * lines from the mean-field free energy with the cell-model crystal; depletion — free-volume
- * theory at size ratio q. Percolation is Chiew–Glandt's, placed through B2*; glass lines and the
- * gel threshold come from the classifier parameters. The attraction shift of the parameters moves
+ * theory at size ratio q. Percolation is Chiew–Glandt's, placed through B2*; the glass line is
+ * idealised mode-coupling theory of adhesive spheres placed through B2* (hard-sphere line for
+ * ranges over 0.25 σ; see glassLineTable), rescaled onto glassPhi unless `glassLine: 'computed'`;
+ * the gel threshold inside the binodal comes from the classifier parameters. The attraction shift of the parameters moves
  * every theory boundary: a boundary at B2* is drawn at B2* + attractionShift.
  *
  * Numerics: `levels` attraction levels (default 200) uniform in y; coexistence by continuation
@@ -88,6 +92,9 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
   const columns = requireInteger('options.gridColumns', options.gridColumns ?? 128, 10, 1000);
   const rows = requireInteger('options.gridRows', options.gridRows ?? 96, 10, 1000);
   const parameters = resolveClassifierParameters(options.parameters);
+  if (options.glassLine !== undefined && options.glassLine !== 'rescaled' && options.glassLine !== 'computed') {
+    throw new PhysicsArgumentError('options.glassLine', "'rescaled' or 'computed'", options.glassLine);
+  }
   const polydispersity = options.polydispersity === undefined ? null : requireInRange('options.polydispersity', options.polydispersity, 0, 100, { what: 'a size polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
   const crystalSuppressed = polydispersity !== null && polydispersity > parameters.polydispersityCrystalThreshold;
 
@@ -106,12 +113,15 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
   }
   const theory = createMapFrame(resolved, axis, 0, table);
   const drawn = createMapFrame(resolved, axis, shift, table);
-  const physics = resolved.kind === 'generic' ? genericLevelPhysics(resolved.theory, theory) : depletionLevelPhysics(resolved.q, theory);
+  const physics = resolved.kind === 'generic'
+    ? genericLevelPhysics(resolved.theory, theory)
+    : resolved.q <= SHORT_RANGE_LIMIT ? shortRangeDepletionLevelPhysics(resolved.q, theory) : depletionLevelPhysics(resolved.q, theory);
   const traced = traceTheoryCurves(physics, levelsU);
 
-  const partial = { binodal: traced.binodal, spinodal: traced.spinodal, freezing: traced.freezing, melting: traced.melting };
+  const glass = glassLineTable(resolved, theory, parameters, options.glassLine ?? 'rescaled');
+  const partial = { binodal: traced.binodal, spinodal: traced.spinodal, freezing: traced.freezing, melting: traced.melting, glass: glass.curve, attractiveGlassFrom: glass.attractiveFrom };
   const names = modelNames(resolved);
-  const curves = buildDrawnCurves(partial, theory, drawn, parameters, names);
+  const curves = buildDrawnCurves(partial, theory, drawn, parameters, names, glass.source);
   const tables: ClassifierTables = { ...partial, ...(table ? { reducedB2: table } : {}), curves, active: [] };
   const stateAt = (phi: number, y: number) => stateOfCause(stateAtDrawnPoint(tables, theory, drawn, parameters, crystalSuppressed, phi, y));
   // Percolation never changes the predicted state (the rule does not use it): no need to test it.
@@ -122,6 +132,7 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
     model: resolved,
     modelName: names.model,
     parameters,
+    glassLine: glass.source,
     polydispersity,
     crystalSuppressed,
     levels,
@@ -130,7 +141,7 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
     boundaries: drawnBoundaries(curves, tables, theory, drawn),
     markers: buildMarkers(traced, drawn, names),
     regions: buildRegions(tables, theory, drawn, parameters, crystalSuppressed, columns, rows),
-    notes: buildNotes(resolved, traced, theory, parameters, polydispersity, crystalSuppressed),
+    notes: buildNotes(resolved, traced, theory, parameters, polydispersity, crystalSuppressed, glass.source),
     tables,
   };
 }
@@ -155,6 +166,14 @@ function requireInteger(argument: string, value: number, low: number, high: numb
 }
 
 function modelNames(model: MapModel): { model: string; binodal: string; spinodal: string; critical: string } {
+  if (model.kind === 'depletion' && model.q <= SHORT_RANGE_LIMIT) {
+    return {
+      model: `Colloid + ideal polymer, short range (q = ${model.q}): free-volume crystal lines, fluid–fluid lines by B2*`,
+      binodal: 'Fluid–fluid binodal (mean field through B2*, approximate)',
+      spinodal: 'Spinodal (mean field through B2*)',
+      critical: 'Critical point (mean field through B2*)',
+    };
+  }
   if (model.kind === 'depletion') {
     return {
       model: `Colloid + ideal polymer, free-volume theory (q = ${model.q})`,
@@ -269,9 +288,8 @@ function buildMarkers(traced: TheoryCurves, drawn: MapFrame, names: { critical: 
 
 /**
  * The region grid. Along a row the attraction is fixed, so the rule's cause can only change at
- * the row's thresholds (spinodal, binodal, glassPhi, freezing, melting and where the attractive-
- * glass line crosses the row): the rule is evaluated once per interval between them (at its
- * middle) and the interval's cells filled.
+ * the row's thresholds (spinodal, binodal, glass line, freezing, melting): the rule is evaluated
+ * once per interval between them (at its middle) and the interval's cells filled.
  */
 function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFrame, parameters: ClassifierParameters, crystalSuppressed: boolean, columns: number, rows: number): StateRegions {
   // A plain packed array, filled in order (Array.from on a typed array costs ~1 ms here).
@@ -284,10 +302,7 @@ function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFram
     const effectiveB2 = drawn.b2FromY(y) - drawn.shift;
     const u0 = drawn.shift === 0 ? theory.uFromY(y) : theory.uFromY(theory.yFromB2(effectiveB2));
     ruleRowAt(tables, u0, effectiveB2, row);
-    const attractiveFrom = parameters.attractiveGlassSlope > 0
-      ? parameters.glassPhi - (parameters.attractiveGlassB2 - effectiveB2) / parameters.attractiveGlassSlope
-      : NaN;
-    const cuts = [row.spinodalLow, row.spinodalHigh, row.binodalLow, row.binodalHigh, parameters.glassPhi, row.freezing, row.melting, attractiveFrom]
+    const cuts = [row.spinodalLow, row.spinodalHigh, row.binodalLow, row.binodalHigh, row.glass, row.freezing, row.melting]
       .filter((phi) => phi > 0 && phi < closePacking)
       .sort((a, b) => a - b);
     cuts.push(closePacking);
@@ -307,7 +322,7 @@ function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFram
   return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells };
 }
 
-function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, parameters: ClassifierParameters, polydispersity: number | null, crystalSuppressed: boolean): string[] {
+function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, parameters: ClassifierParameters, polydispersity: number | null, crystalSuppressed: boolean, glass: GlassLineSource): string[] {
   const notes = [
     'Approximate: predictions come from published theory and the team\'s calibration; they do not replace stability testing.',
   ];
@@ -324,16 +339,37 @@ function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, par
   } else {
     const endpoint = freeVolumeCriticalEndpoint();
     notes.push(`Free-volume theory (Lekkerkerker et al. 1992) for colloids with ideal polymer at size ratio q = ${model.q}; attraction is the Asakura–Oosawa depletion potential.`);
-    notes.push(model.q > endpoint
-      ? `q above the critical endpoint (${endpoint.toFixed(4)}): a stable gas–liquid region exists up to the triple point.`
-      : `q below the critical endpoint (${endpoint.toFixed(4)}): the gas–liquid binodal is metastable inside fluid–crystal coexistence and is drawn dashed.`);
-    if (model.q > 0.6) notes.push('Size ratios above about 0.6 stretch the ideal-polymer, free-volume description; treat the lines as indicative.');
-    const critical = freeVolumeCriticalPoint(model.q);
-    if (critical.polymerReservoir > theory.axis.strongest) notes.push(`The gas–liquid critical point (φ_p^R = ${critical.polymerReservoir.toFixed(3)}) lies above the top of this map: no fluid–fluid lines are drawn.`);
-    else if (critical.phi > 0.6) notes.push(`The gas–liquid critical point lies at φ = ${critical.phi.toFixed(3)}, inside the glass: its binodal is mostly hidden behind the glass line.`);
+    if (model.q <= SHORT_RANGE_LIMIT) {
+      notes.push(`Short-range depletion (q ≤ ${SHORT_RANGE_LIMIT}): the fluid–fluid lines (binodal, spinodal, critical point) are the mean-field lines at each level's B2* (extended law of corresponding states, as Lu et al. 2008 placed their depletion gels); free-volume theory gives the fluid–crystal lines. Its own gas–liquid dome lies at φ ≳ 0.6 for such small q, where it says nothing about dilute gels.`);
+    } else {
+      notes.push(model.q > endpoint
+        ? `q above the critical endpoint (${endpoint.toFixed(4)}): a stable gas–liquid region exists up to the triple point.`
+        : `q below the critical endpoint (${endpoint.toFixed(4)}): the gas–liquid binodal is metastable inside fluid–crystal coexistence and is drawn dashed.`);
+      if (model.q > 0.6) notes.push('Size ratios above about 0.6 stretch the ideal-polymer, free-volume description; treat the lines as indicative.');
+      const critical = freeVolumeCriticalPoint(model.q);
+      if (critical.beyondClosePacking) notes.push(`The free-volume critical point lies at φ = ${critical.phi.toFixed(3)}, beyond close packing: a formal point, with no real gas–liquid region.`);
+      else if (critical.polymerReservoir > theory.axis.strongest) notes.push(`The gas–liquid critical point (φ_p^R = ${critical.polymerReservoir.toFixed(3)}) lies above the top of this map: no fluid–fluid lines are drawn.`);
+      else if (critical.phi > 0.6) notes.push(`The gas–liquid critical point lies at φ = ${critical.phi.toFixed(3)}, inside the glass: its binodal is mostly hidden behind the glass line.`);
+    }
   }
-  notes.push(`Glass lines: repulsive glass at φ = ${parameters.glassPhi}; the attractive-glass line and the gel threshold (B2* = ${parameters.gelB2Threshold}) are approximate placeholders for calibration.`);
+  notes.push(...glassNotes(glass, parameters));
+  notes.push(`Gel: inside the spinodal and below the glass line (arrested spinodal decomposition, Lu et al., Nature 453, 499 (2008)); inside the binodal a sample gels when B2* ≤ ${parameters.gelB2Threshold}${parameters.gelB2Threshold === DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold ? ' (default: the critical B2* ≈ −1.5, since Lu et al. saw every quench into the two-phase region gel)' : ' (calibrated; default −1.5 from Lu et al. 2008)'}, otherwise it separates slowly.`);
   if (parameters.attractionShift !== 0) notes.push(`Attraction scale shifted by ${parameters.attractionShift} in B2* (calibration): every theory boundary is drawn at B2* + ${parameters.attractionShift}.`);
-  if (crystalSuppressed) notes.push(`Polydispersity ${polydispersity} % exceeds ${parameters.polydispersityCrystalThreshold} %: crystallisation is suppressed; the crystal region is greyed and classified as fluid (glass above φ = ${parameters.glassPhi}).`);
+  if (crystalSuppressed) notes.push(`Polydispersity ${polydispersity} % exceeds ${parameters.polydispersityCrystalThreshold} %: crystallisation is suppressed; the crystal region is greyed and classified as fluid (glass beyond the glass line).`);
   return notes;
+}
+
+/** Plain words on where the glass line comes from and how far to trust it. */
+function glassNotes(glass: GlassLineSource, parameters: ClassifierParameters): string[] {
+  const grid = `M = ${glass.points} wave numbers up to k_max σ = ${glass.cutoff}`;
+  const placement = glass.mapping === 'rescaled'
+    ? `drawn rescaled: every φ × ${glass.scale.toFixed(4)} so that hard spheres sit at the observed φ_g = ${parameters.glassPhi} (MCT computes ${glass.computedHardSpherePhi.toFixed(4)}; the usual practice, as MCT places the transition too low)`
+    : `drawn as computed (hard spheres at ${glass.computedHardSpherePhi.toFixed(4)}, below the observed φ_g ≈ 0.58; choose the rescaled line to compare with the bench)`;
+  if (glass.kind === 'hardSphere') {
+    return [`Glass line: the hard-sphere transition of idealised mode-coupling theory (Percus–Yevick structure, ${grid}), ${placement}. The attraction's range (${glass.range?.toFixed(2)} σ) exceeds ${SHORT_RANGE_LIMIT} σ, too long for the adhesive-sphere glass lines, so no attractive glass is drawn.`];
+  }
+  return [
+    `Glass lines: idealised mode-coupling theory of adhesive hard spheres (Percus–Yevick structure factor, Baxter 1968; ${grid}), each attraction placed through its B2*; ${placement}.`,
+    'The line is re-entrant: weak short-range attraction melts the repulsive glass (its φ rises), strong attraction arrests at lower φ into an attractive glass (Bergenholtz & Fuchs 1999; Dawson et al. 2000; Pham et al., Science 2002). The sticky part depends on the cut-off k_max (a stand-in for the range of the attraction) and is approximate; past the nose, where the theory meets near-critical structure, the line holds its last computed φ.',
+  ];
 }

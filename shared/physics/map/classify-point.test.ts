@@ -42,18 +42,19 @@ describe('classifyPoint', () => {
     expect(result.reason).toContain('spinodal');
   });
 
-  it('predicts separated between binodal and spinodal at moderate attraction, gel beyond the threshold', () => {
+  it('gels everywhere inside the binodal by default (Lu et al. 2008), and separates between binodal and spinodal above a calibrated threshold', () => {
     const moderate = -2.5;
     const binodal = meanFieldBinodal(moderate)!;
     const spinodal = meanFieldSpinodal(moderate)!;
     const phi = 0.5 * (binodal.gas + spinodal.low);
-    expect(classifyPoint(map, { phi, attraction: b2(moderate) }).state).toBe('separated');
-    // Same point with the gel threshold moved above it (a calibration): gel.
-    expect(classifyPoint(map, { phi, attraction: b2(moderate) }, { gelB2Threshold: -2 }).state).toBe('gel');
+    expect(classifyPoint(map, { phi, attraction: b2(moderate) }).state).toBe('gel');
+    expect(classifyPoint(map, { phi, attraction: b2(moderate) }).reason).toContain('binodal');
+    // A calibration that lowers the threshold below the point: slow nucleated separation.
+    expect(classifyPoint(map, { phi, attraction: b2(moderate) }, { gelB2Threshold: -3 }).state).toBe('separated');
     const strong = -5;
     const strongBinodal = meanFieldBinodal(strong)!;
     const strongSpinodal = meanFieldSpinodal(strong)!;
-    expect(classifyPoint(map, { phi: 0.5 * (strongBinodal.gas + strongSpinodal.low), attraction: b2(strong) }).state).toBe('gel');
+    expect(classifyPoint(map, { phi: 0.5 * (strongBinodal.gas + strongSpinodal.low), attraction: b2(strong) }, { gelB2Threshold: -3 }).state).toBe('gel');
   });
 
   it('predicts fluid below freezing, crystal in coexistence and above melting, glass at φ ≥ 0.58', () => {
@@ -177,7 +178,10 @@ describe('signedBoundaryDistance', () => {
   it('is positive at higher φ for freezing and the repulsive glass, above the line for percolation', () => {
     expect(signedBoundaryDistance(map, { phi: 0.52, attraction: b2(1) }, 'freezing')!).toBeGreaterThan(0);
     expect(signedBoundaryDistance(map, { phi: 0.45, attraction: b2(1) }, 'freezing')!).toBeLessThan(0);
-    expect(signedBoundaryDistance(map, { phi: 0.6, attraction: b2(0) }, 'repulsive-glass')!).toBeGreaterThan(0);
+    // Weak stickiness (B2* = 0.95, τ = 5) keeps the repulsive branch of the glass line (≈ 0.60 rescaled).
+    expect(signedBoundaryDistance(map, { phi: 0.66, attraction: b2(0.95) }, 'repulsive-glass')!).toBeGreaterThan(0);
+    expect(signedBoundaryDistance(map, { phi: 0.5, attraction: b2(0.95) }, 'repulsive-glass')!).toBeLessThan(0);
+    expect(signedBoundaryDistance(map, { phi: 0.5, attraction: b2(-4) }, 'attractive-glass')!).toBeGreaterThan(0);
     // τ_p(0.3) = 0.359 (B2* = 0.30): B2* = 0 is stickier, above the line.
     expect(signedBoundaryDistance(map, { phi: 0.3, attraction: b2(0) }, 'percolation')!).toBeGreaterThan(0);
     expect(signedBoundaryDistance(map, { phi: 0.3, attraction: b2(0.5) }, 'percolation')!).toBeLessThan(0);

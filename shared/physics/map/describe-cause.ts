@@ -11,19 +11,19 @@ export function describeCause(cause: StateCause, row: RuleRow, phi: number, para
   const b2 = `B2* = ${fmt(row.b2)}`;
   switch (cause) {
     case 'gel-spinodal':
-      return `Inside the spinodal (unstable between φ = ${fmt(row.spinodalLow)} and ${fmt(row.spinodalHigh)} at ${b2}) and below the glass line: spinodal decomposition arrests into a gel.`;
+      return `Inside the spinodal (unstable between φ = ${fmt(row.spinodalLow)} and ${fmt(row.spinodalHigh)} at ${b2}) and below the glass line (φ_g = ${fmt(row.glass)}): spinodal decomposition arrests into a gel.`;
     case 'gel-binodal':
       return `Inside the binodal (φ = ${fmt(row.binodalLow)}–${fmt(row.binodalHigh)}) with strong attraction (${b2} ≤ ${parameters.gelB2Threshold}): phase separation arrests into a gel.`;
     case 'separated':
       return `Between the binodal (φ = ${fmt(row.binodalLow)}–${fmt(row.binodalHigh)}) and the spinodal at moderate attraction (${b2} > ${parameters.gelB2Threshold}): slow nucleated phase separation.`;
     case 'glass-attractive':
-      return `Attraction beyond the approximate attractive-glass line at φ = ${fmt(phi)} (${b2}): bonds cage the particles, an attractive glass.`;
+      return `φ = ${fmt(phi)} at or beyond the attractive-glass line (φ_g = ${fmt(row.glass)} at ${b2}, mode-coupling theory, approximate): bonds cage the particles, an attractive glass.`;
     case 'glass-repulsive':
-      return `φ = ${fmt(phi)} ≥ ${parameters.glassPhi} with weak attraction (${b2}): crowding cages the particles, a repulsive glass.`;
+      return `φ = ${fmt(phi)} at or beyond the glass line (φ_g = ${fmt(row.glass)} at ${b2}, mode-coupling theory): crowding cages the particles, a repulsive glass.`;
     case 'crystal-coexistence':
       return `Inside fluid–crystal coexistence (φ = ${fmt(row.freezing)}–${fmt(row.melting)} at ${b2}): crystals nucleate and grow.`;
     case 'crystal':
-      return `Above melting (φ > ${fmt(row.melting)}) and below the glass line ${parameters.glassPhi} with weak attraction: crystal.`;
+      return `Above melting (φ > ${fmt(row.melting)}) and below the glass line (φ_g = ${fmt(row.glass)}) with weak attraction: crystal.`;
     case 'fluid-suppressed':
       return `In the crystal region (φ > ${fmt(row.freezing)}) but crystallisation is suppressed by ${polydispersity} % polydispersity (> ${parameters.polydispersityCrystalThreshold} %): stays a (supercooled) fluid.`;
     case 'fluid':

@@ -1,9 +1,8 @@
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
-import { attractiveGlassLineB2 } from './classifier-parameters';
-import { domeAt } from './state-rule';
+import { curveAt, domeAt } from './state-rule';
 import type { MapFrame } from './map-frame';
 import { clipPolyline } from './polyline-tools';
-import type { BoundaryId, ClassifierParameters, ClassifierTables, DomeCurve, LevelCurve, MapPoint } from './types';
+import type { BoundaryId, ClassifierParameters, ClassifierTables, DomeCurve, GlassLineSource, LevelCurve, MapPoint } from './types';
 import { baxterPercolationStickiness } from '../fluid-fluid/baxter-percolation-stickiness';
 
 export type DrawnCurve = ClassifierTables['curves'][number];
@@ -25,11 +24,12 @@ export function roundPoint(point: MapPoint): MapPoint {
  * to the y domain. Internal.
  */
 export function buildDrawnCurves(
-  tables: Pick<ClassifierTables, 'binodal' | 'spinodal' | 'freezing' | 'melting'>,
+  tables: Pick<ClassifierTables, 'binodal' | 'spinodal' | 'freezing' | 'melting' | 'glass' | 'attractiveGlassFrom'>,
   theory: MapFrame,
   drawn: MapFrame,
   parameters: ClassifierParameters,
   labels: { binodal: string; spinodal: string },
+  glass: GlassLineSource,
 ): DrawnCurve[] {
   const curves: DrawnCurve[] = [];
   const shift = drawn.shift;
@@ -60,27 +60,31 @@ export function buildDrawnCurves(
   }
   add('percolation', 'Percolation (Chiew–Glandt, Percus–Yevick)', 'yOfPhi', percolation);
 
-  const onsetY = drawn.yFromB2(parameters.attractiveGlassB2 + shift);
-  const onsetU = Math.min(Math.max(drawn.uFromY(onsetY), 0), 1);
-  add('repulsive-glass', `Repulsive glass (φ = ${parameters.glassPhi})`, 'phiOfY', [
-    [parameters.glassPhi, drawn.yFromU(0)],
-    [parameters.glassPhi, drawn.yFromU(onsetU)],
-  ]);
-
-  const attractive: MapPoint[] = [];
-  for (let i = 0; i <= samples; i++) {
-    const phi = (FCC_CLOSE_PACKING * i) / samples;
-    attractive.push([phi, drawn.yFromB2(attractiveGlassLineB2(phi, parameters) + shift)]);
+  const placed = glass.mapping === 'rescaled' ? `MCT, rescaled to φ_g = ${parameters.glassPhi}` : 'MCT, as computed';
+  const glassPoints = levelPoints(tables.glass);
+  const nose = tables.attractiveGlassFrom;
+  if (nose === null) {
+    // Flat in φ: extend to the map's top whatever the theory span.
+    const phi = tables.glass.phi[0];
+    add('repulsive-glass', `Repulsive glass (${placed})`, 'phiOfY', [[phi, drawn.yFromU(0)], [phi, drawn.yFromU(1)]]);
+  } else {
+    const split = tables.glass.u.indexOf(nose);
+    add('repulsive-glass', `Repulsive glass (${placed})`, 'phiOfY', glassPoints.slice(0, split + 1));
+    const attractive = glassPoints.slice(split);
+    const last = attractive[attractive.length - 1];
+    // Held beyond the last level: continue to the map's top.
+    if (drawn.uFromY(last[1]) < 1) attractive.push([last[0], drawn.yFromU(1)]);
+    add('attractive-glass', `Attractive glass (${placed}; approximate)`, 'phiOfY', attractive);
   }
-  add('attractive-glass', 'Attractive glass (approximate)', 'yOfPhi', attractive);
 
   const gelU0 = theory.uFromY(theory.yFromB2(parameters.gelB2Threshold));
   const gelBinodal = domeAt(tables.binodal, gelU0);
-  if (gelBinodal && gelBinodal[0] < parameters.glassPhi) {
+  const glassAtGel = curveAt(tables.glass, gelU0);
+  if (gelBinodal && gelBinodal[0] < glassAtGel) {
     const y = drawn.yFromB2(parameters.gelB2Threshold + shift);
     add('gel', `Gel threshold inside the binodal (B2* = ${parameters.gelB2Threshold}, approximate)`, 'yOfPhi', [
       [gelBinodal[0], y],
-      [Math.min(gelBinodal[1], parameters.glassPhi), y],
+      [Math.min(gelBinodal[1], glassAtGel), y],
     ]);
   }
   return curves;

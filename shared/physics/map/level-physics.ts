@@ -108,6 +108,28 @@ export function depletionLevelPhysics(q: number, frame: MapFrame): LevelPhysics 
   };
 }
 
+/**
+ * Level physics of a short-range depletion map (q ≤ SHORT_RANGE_LIMIT): the fluid–crystal lines
+ * from free-volume theory, the fluid–fluid lines (critical point, binodal, spinodal) from the
+ * mean-field CS + B2* theory at each level's Asakura–Oosawa B2* — the extended law of
+ * corresponding states, as Lu et al. (Nature 453, 499 (2008)) mapped their depletion gels.
+ * At small q free-volume theory puts its (metastable) gas–liquid dome at φ ≳ 0.6, where no
+ * dilute sample could enter it; short-range attraction is what B2* describes well. No triple
+ * point: the two free energies differ. Internal.
+ */
+export function shortRangeDepletionLevelPhysics(q: number, frame: MapFrame): LevelPhysics {
+  const crystal = depletionLevelPhysics(q, frame);
+  const fluidFluid = genericLevelPhysics('meanField', frame);
+  return {
+    critical: fluidFluid.critical,
+    fluid: crystal.fluid,
+    solid: crystal.solid,
+    binodalBranches: fluidFluid.binodalBranches,
+    spinodal: fluidFluid.spinodal,
+    findTriplePoint: false,
+  };
+}
+
 /** Remember the result for the last argument: the driver asks several questions per level. */
 function memoizeLast<R>(compute: (u: number) => R): (u: number) => R {
   let lastU = NaN;

@@ -22,6 +22,7 @@ export class PointClassification implements ClassifiedPoint {
   readonly #binodalHigh: number;
   readonly #freezing: number;
   readonly #melting: number;
+  readonly #glass: number;
   readonly #b2: number;
   readonly #phi: number;
   readonly #parameters: ClassifierParameters;
@@ -60,6 +61,7 @@ export class PointClassification implements ClassifiedPoint {
     this.#binodalHigh = row.binodalHigh;
     this.#freezing = row.freezing;
     this.#melting = row.melting;
+    this.#glass = row.glass;
     this.#b2 = row.b2;
     this.#phi = phi;
     this.#parameters = parameters;
@@ -77,6 +79,8 @@ export class PointClassification implements ClassifiedPoint {
       binodalHigh: this.#binodalHigh,
       freezing: this.#freezing,
       melting: this.#melting,
+      glass: this.#glass,
+      attractive: this.#cause === 'glass-attractive',
       b2: this.#b2,
     }, this.#phi, this.#parameters, this.#polydispersity);
     return this.#reason;

@@ -12,8 +12,8 @@ import type { AttractionInput, BoundaryId, MapPoint, StateMap } from './types';
  * distance to the nearest point of any drawn piece of that boundary (stable or metastable, active
  * or not). The sign is positive on the side the boundary announces:
  * - 'binodal', 'spinodal': inside the dome (two-phase / unstable side);
- * - 'freezing', 'melting', 'repulsive-glass': at higher φ than the line;
- * - 'percolation', 'attractive-glass', 'gel': at stronger attraction than the line (above it);
+ * - 'freezing', 'melting', 'repulsive-glass', 'attractive-glass': at higher φ than the line;
+ * - 'percolation', 'gel': at stronger attraction than the line (above it);
  *   beyond the ends of a line the end value is used.
  * A calibration can fit P(observed state) = logistic(a + b·distance) against it.
  *

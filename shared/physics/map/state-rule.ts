@@ -1,4 +1,3 @@
-import { attractiveGlassLineB2 } from './classifier-parameters';
 import type { ClassifierParameters, ClassifierTables, DomeCurve, LevelCurve, PredictedState } from './types';
 
 // The lookups live here, next to the rule that calls them per point (no cross-module call in
@@ -78,11 +77,19 @@ export interface RuleRow {
   binodalHigh: number;
   freezing: number;
   melting: number;
+  /** φ of the glass line at this level, and whether the glass there is the attractive one. */
+  glass: number;
+  attractive: boolean;
   b2: number;
 }
 
 export function emptyRow(): RuleRow {
-  return { spinodalLow: NaN, spinodalHigh: NaN, binodalLow: NaN, binodalHigh: NaN, freezing: NaN, melting: NaN, b2: NaN };
+  return { spinodalLow: NaN, spinodalHigh: NaN, binodalLow: NaN, binodalHigh: NaN, freezing: NaN, melting: NaN, glass: NaN, attractive: false, b2: NaN };
+}
+
+/** Whether the glass at level u₀ is the attractive one (past the line's nose). Internal. */
+export function attractiveAt(tables: ClassifierTables, u0: number): boolean {
+  return tables.attractiveGlassFrom !== null && u0 > tables.attractiveGlassFrom;
 }
 
 /** Fill `row` with every threshold at u₀ (a row of the region grid shares one). Internal. */
@@ -97,28 +104,28 @@ export function ruleRowAt(tables: ClassifierTables, u0: number, b2: number, row:
   row.binodalHigh = inBinodal ? curveAt(binodal.right, u0) : NaN;
   row.freezing = curveAt(tables.freezing, u0);
   row.melting = curveAt(tables.melting, u0);
+  row.glass = curveAt(tables.glass, u0);
+  row.attractive = attractiveAt(tables, u0);
   row.b2 = b2;
   return row;
 }
 
 /**
  * Gelwright's state rule (physics.md §5) on a prepared row, at φ (comparisons with NaN are
- * false, i.e. "absent"):
- * 1. inside the spinodal and φ < glassPhi → gel (spinodal decomposition arrested);
- * 2. inside the binodal, φ < glassPhi → gel if B2*_eff ≤ gelB2Threshold, else separated;
- * 3. B2*_eff at or below the attractive-glass line B2*_AG(φ) → glass (attractive);
- * 4. φ ≥ glassPhi → glass (repulsive);
- * 5. φ above the fluid side of fluid–crystal coexistence → crystal (fluid when the crystal is
+ * false, i.e. "absent"); φ_g is the glass line at the row's level (mode-coupling theory):
+ * 1. inside the spinodal and φ < φ_g → gel (spinodal decomposition arrested, Lu et al. 2008);
+ * 2. inside the binodal, φ < φ_g → gel if B2*_eff ≤ gelB2Threshold, else separated;
+ * 3. φ ≥ φ_g → glass: attractive past the line's nose, repulsive before it;
+ * 4. φ above the fluid side of fluid–crystal coexistence → crystal (fluid when the crystal is
  *    suppressed by polydispersity);
- * 6. otherwise fluid.
+ * 5. otherwise fluid.
  * Internal.
  */
 export function causeOnRow(row: RuleRow, parameters: ClassifierParameters, crystalSuppressed: boolean, phi: number): StateCause {
-  const belowGlass = phi < parameters.glassPhi;
+  const belowGlass = phi < row.glass;
   if (belowGlass && phi > row.spinodalLow && phi < row.spinodalHigh) return 'gel-spinodal';
   if (belowGlass && phi > row.binodalLow && phi < row.binodalHigh) return row.b2 <= parameters.gelB2Threshold ? 'gel-binodal' : 'separated';
-  if (row.b2 <= attractiveGlassLineB2(phi, parameters)) return 'glass-attractive';
-  if (!belowGlass) return 'glass-repulsive';
+  if (!belowGlass) return row.attractive ? 'glass-attractive' : 'glass-repulsive';
   if (phi > row.freezing) {
     if (crystalSuppressed) return 'fluid-suppressed';
     return phi < row.melting ? 'crystal-coexistence' : 'crystal';
@@ -144,7 +151,9 @@ export function decideCause(
 ): StateCause {
   row.spinodalLow = NaN; row.spinodalHigh = NaN; row.binodalLow = NaN; row.binodalHigh = NaN;
   row.freezing = NaN; row.melting = NaN; row.b2 = b2;
-  const belowGlass = phi < parameters.glassPhi;
+  row.glass = curveAt(tables.glass, u0);
+  row.attractive = attractiveAt(tables, u0);
+  const belowGlass = phi < row.glass;
   if (belowGlass) {
     const spinodal = tables.spinodal;
     if (spinodal !== null && u0 >= spinodal.bottom) {
@@ -159,8 +168,7 @@ export function decideCause(
       if (phi > row.binodalLow && phi < row.binodalHigh) return b2 <= parameters.gelB2Threshold ? 'gel-binodal' : 'separated';
     }
   }
-  if (b2 <= parameters.attractiveGlassB2 - parameters.attractiveGlassSlope * (parameters.glassPhi - phi)) return 'glass-attractive';
-  if (!belowGlass) return 'glass-repulsive';
+  if (!belowGlass) return row.attractive ? 'glass-attractive' : 'glass-repulsive';
   row.freezing = curveAt(tables.freezing, u0);
   if (phi > row.freezing) {
     if (crystalSuppressed) return 'fluid-suppressed';

@@ -27,14 +27,31 @@ export interface ClassifierParameters {
   attractionShift: number;
   /** Inside the binodal (outside the spinodal) a point with B2*_effective ≤ this is a gel. */
   gelB2Threshold: number;
-  /** Volume fraction of the repulsive glass transition. */
+  /** Observed hard-sphere glass transition: the computed (MCT) glass line is rescaled onto it. */
   glassPhi: number;
   /** Size polydispersity (%) above which crystallisation is taken as suppressed. */
   polydispersityCrystalThreshold: number;
-  /** B2*_effective of the approximate attractive-glass line at φ = glassPhi. */
-  attractiveGlassB2: number;
-  /** Slope d(B2*)/dφ of that line: at lower φ the line needs stronger attraction. */
-  attractiveGlassSlope: number;
+}
+
+/**
+ * How the mode-coupling glass line is placed in φ: 'rescaled' (default) multiplies every φ of the
+ * computed line by glassPhi/φ_c(hard spheres), so hard spheres sit at the observed 0.58;
+ * 'computed' draws MCT's own numbers (hard spheres at 0.5159).
+ */
+export type GlassLineMapping = 'rescaled' | 'computed';
+
+/** Where a map's glass line came from, for notes and legends. */
+export interface GlassLineSource {
+  mapping: GlassLineMapping;
+  /** 'mct': the adhesive-sphere MCT line through B2*; 'hardSphere': attraction too long-ranged for it. */
+  kind: 'mct' | 'hardSphere';
+  /** MCT's hard-sphere φ_c on the grid, and the factor applied to every φ of the line. */
+  computedHardSpherePhi: number;
+  scale: number;
+  points: number;
+  cutoff: number;
+  /** Range of the attraction in σ that decided `kind` (null when unknown: placed by B2*). */
+  range: number | null;
 }
 
 /** Boundary identifiers; one id may be drawn as several pieces (e.g. stable and metastable). */
@@ -118,6 +135,10 @@ export interface ClassifierTables {
   melting: LevelCurve;
   /** Depletion maps only: B2* at each level (u₀ ascending), for y ↔ B2* conversions. */
   reducedB2?: { u: number[]; b2: number[] };
+  /** φ of the glass line against u₀ (theory frame, mapping applied). */
+  glass: LevelCurve;
+  /** u₀ of the glass line's nose: at stronger attraction the glass is attractive (null: never). */
+  attractiveGlassFrom: number | null;
   /** Drawn curves (with the map's shift), in map units, per boundary id, for distances and signs. */
   curves: Array<{ id: BoundaryId; label: string; shape: 'dome' | 'phiOfY' | 'yOfPhi'; points: MapPoint[] }>;
   /** For each drawn curve, a 0/1 flag per segment: 1 where the predicted state changes across it. */
@@ -129,6 +150,7 @@ export interface StateMap {
   model: MapModel;
   modelName: string;
   parameters: ClassifierParameters;
+  glassLine: GlassLineSource;
   /** Size polydispersity (%) the map was built for, or null. */
   polydispersity: number | null;
   crystalSuppressed: boolean;
@@ -151,6 +173,8 @@ export interface StateMapOptions {
   polydispersity?: number;
   /** Top of the y axis in its own unit (strongest attraction); default from B2* = −10. */
   yMax?: number;
+  /** Placement of the mode-coupling glass line (default 'rescaled'). */
+  glassLine?: GlassLineMapping;
   /** Region grid (default 128 columns × 96 rows). */
   gridColumns?: number;
   gridRows?: number;

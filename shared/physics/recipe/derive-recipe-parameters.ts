@@ -8,7 +8,9 @@ import { volumeFractionFromMassFraction } from '../colloid/volume-fraction-from-
 import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { attractionToMapY } from '../map/attraction-to-map-y';
+import { FREE_VOLUME_MAX_POLYMER } from '../depletion/free-volume-limits';
 import { buildStateMap } from '../map/build-state-map';
+import { SHORT_RANGE_LIMIT } from '../map/glass-line-table';
 import { classifyPoint } from '../map/classify-point';
 import { PHYSICS_MODEL_VERSION } from '../map/model-version';
 import type { StateMap } from '../map/types';
@@ -68,12 +70,21 @@ export function deriveRecipeParameters(input: RecipeInput, options: { map?: Stat
   }
 
   const sameModel = options.map && JSON.stringify(options.map.model) === JSON.stringify({ ...attraction.mapModel, ...(attraction.mapModel.kind === 'generic' ? { lambda: attraction.mapModel.lambda ?? 1.5 } : {}) });
-  const map = sameModel ? options.map! : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
+  let map = sameModel ? options.map! : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
   if (map.crystalSuppressed) warnings.push(`Polydispersity ${polydispersity} % above ${map.parameters.polydispersityCrystalThreshold} %: crystallisation taken as suppressed.`);
   const mapY = attractionToMapY(map, attraction.attraction);
   const uOnMap = (mapY - map.y.weakest) / (map.y.strongest - map.y.weakest);
-  if (uOnMap > 1) warnings.push('The attraction lies beyond the top of the map; the prediction extrapolates its strongest boundaries.');
-  const classification = classifyPoint(map, { phi, attraction: attraction.attraction }, sameModel ? input.parameters : undefined).toJSON();
+  let parametersForPoint = sameModel ? input.parameters : undefined;
+  if (uOnMap > 1 && map.model.kind === 'depletion' && map.model.q > SHORT_RANGE_LIMIT) {
+    // Long-range depletion is placed by free-volume theory itself, whose domes keep widening
+    // far above the default top: classify on a map tall enough to hold the sample.
+    map = buildStateMap(map.model, { parameters: { ...map.parameters, ...input.parameters }, ...(polydispersity !== undefined ? { polydispersity } : {}), yMax: Math.min(FREE_VOLUME_MAX_POLYMER, mapY * 1.05) });
+    parametersForPoint = undefined;
+    if (mapY > FREE_VOLUME_MAX_POLYMER) warnings.push(`The reservoir polymer fraction (${mapY.toPrecision(3)}) is beyond what free-volume theory is computed for (${FREE_VOLUME_MAX_POLYMER}); the prediction extrapolates its strongest boundaries.`);
+  } else if (uOnMap > 1) {
+    warnings.push('The attraction lies beyond the top of the map; the prediction extrapolates its strongest boundaries.');
+  }
+  const classification = classifyPoint(map, { phi, attraction: attraction.attraction }, parametersForPoint).toJSON();
 
   return {
     modelVersion: PHYSICS_MODEL_VERSION,

@@ -1,0 +1,58 @@
+import { modeCouplingGlassLine } from '../arrest/mode-coupling-glass-line';
+import { reducedB2FromStickiness } from '../attraction/reduced-b2-from-stickiness';
+import type { MapFrame } from './map-frame';
+import type { ClassifierParameters, GlassLineMapping, GlassLineSource, LevelCurve, MapModel } from './types';
+
+/**
+ * Longest attraction range (in particle diameters: q for depletion, λ − 1 for a square well)
+ * placed by adhesive-sphere mode-coupling theory through B2*. The extended law of corresponding
+ * states holds for short ranges (Noro & Frenkel, J. Chem. Phys. 113, 2941 (2000), a few percent
+ * of σ; common practice stretches it to about a quarter), and the re-entrant and attractive
+ * glasses are short-range effects (Dawson et al., Phys. Rev. E 63, 011401 (2000)). Longer ranges
+ * keep the hard-sphere glass line and are placed by their own fluid–fluid theory.
+ */
+export const SHORT_RANGE_LIMIT = 0.25;
+
+/**
+ * The highest φ of a map's glass line (its nose): no gel can form at or above it, whatever the
+ * attraction. Used where a whole map is scanned for gels (calibration).
+ */
+export function highestGlassPhi(map: { tables: { glass: { phi: number[] } } }): number {
+  return Math.max(...map.tables.glass.phi);
+}
+
+/** The range of a map model's attraction in σ, or null where the model places any attraction by B2*. */
+export function attractionRangeOfModel(model: MapModel): number | null {
+  if (model.kind === 'depletion') return model.q;
+  return model.axis === 'squareWellDepth' ? (model.lambda ?? 1.5) - 1 : null;
+}
+
+/**
+ * The glass line of a map in its theory frame: φ_g against u₀, and the u₀ of the nose past which
+ * the glass is attractive. Short-range models take the adhesive-sphere MCT line
+ * (modeCouplingGlassLine): each stickiness level τ is placed at B2* = 1 − 1/(4τ) on the map's
+ * axis. Longer ranges take the hard-sphere value at every level (no attractive glass). With the
+ * 'rescaled' mapping every φ is multiplied by glassPhi/φ_c(hard spheres). Internal.
+ */
+export function glassLineTable(model: MapModel, theory: MapFrame, parameters: ClassifierParameters, mapping: GlassLineMapping): { curve: LevelCurve; attractiveFrom: number | null; source: GlassLineSource } {
+  const line = modeCouplingGlassLine();
+  const scale = mapping === 'rescaled' ? parameters.glassPhi / line.hardSpherePhi : 1;
+  const range = attractionRangeOfModel(model);
+  const base = { mapping, computedHardSpherePhi: line.hardSpherePhi, scale, points: line.points, cutoff: line.cutoff, range };
+  if (range !== null && range > SHORT_RANGE_LIMIT) {
+    const phi = line.hardSpherePhi * scale;
+    return { curve: { u: [0, 1], phi: [phi, phi] }, attractiveFrom: null, source: { ...base, kind: 'hardSphere' } };
+  }
+  const u: number[] = [];
+  const phi: number[] = [];
+  let attractiveFrom: number | null = null;
+  for (let i = 0; i < line.tau.length; i++) {
+    const b2 = line.tau[i] === Infinity ? 1 : reducedB2FromStickiness(line.tau[i]);
+    const level = theory.uFromY(theory.yFromB2(b2));
+    if (u.length > 0 && !(level > u[u.length - 1])) continue;
+    u.push(level + 0); // + 0 turns −0 into 0 (JSON has no −0)
+    phi.push(line.phi[i] * scale);
+    if (i === line.nose) attractiveFrom = level;
+  }
+  return { curve: { u, phi }, attractiveFrom, source: { ...base, kind: 'mct' } };
+}
