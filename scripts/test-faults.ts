@@ -80,6 +80,12 @@ async function databaseCrash(app: AppProcess, codes: string[], recipeIds: number
   const scenario = 'database kill -9 under load';
   const ackedObservations = new Set<number>();
   const ackedBatches = new Map<string, number>();
+  // Writes whose client saw an error (5xx, dropped connection, timeout) on some attempt: the note or
+  // key names each, so the database can say afterwards which of them had committed all the same.
+  const erroredObservationNotes = new Set<string>();
+  const erroredBatchKeys = new Set<string>();
+  let replayedAfterError = 0;
+  const acknowledgedWrites = new Set<string>();
   const pendingKeys = new Set<string>();
   const statuses = { before: new Map<number, number>(), down: new Map<number, number>(), after: new Map<number, number>() };
   let phase: keyof typeof statuses = 'before';
@@ -91,9 +97,26 @@ async function databaseCrash(app: AppProcess, codes: string[], recipeIds: number
     while (!stop) {
       n++;
       if (index % 2 === 0) {
-        const response = await client.json('POST', '/api/observations', { recipeId: recipeIds[n % recipeIds.length], mixedAt: '2026-11-05', ageDays: n % 30, observedState: 'gel', method: 'visual', notes: `client ${index} write ${n}` });
-        count(response.status);
-        if (response.status === 201) ackedObservations.add(response.body.observation.id);
+        // Retried with its Idempotency-Key until acknowledged: a write that committed while its
+        // client saw an error comes back as a replay, never as a second observation.
+        const notes = `client ${index} write ${n}`;
+        const key = `single-${index}-${n}-${randomBytes(4).toString('hex')}`;
+        let errored = false;
+        for (let attempt = 0; attempt < 60 && !stop; attempt++) {
+          const response = await client.json('POST', '/api/observations', { recipeId: recipeIds[n % recipeIds.length], mixedAt: '2026-11-05', ageDays: n % 30, observedState: 'gel', method: 'visual', notes }, { 'Idempotency-Key': key });
+          count(response.status);
+          if (response.status === 201) {
+            ackedObservations.add(response.body.observation.id);
+            acknowledgedWrites.add(notes);
+            if (errored && response.replayed) replayedAfterError++;
+            break;
+          }
+          if (response.status >= 500 || response.status <= 0) {
+            errored = true;
+            erroredObservationNotes.add(notes);
+          }
+          await sleep(200);
+        }
       } else {
         // A batch is retried with its key until it is acknowledged, as a careful client would.
         const key = `crash-${index}-${n}-${randomBytes(4).toString('hex')}`;
@@ -105,8 +128,11 @@ async function databaseCrash(app: AppProcess, codes: string[], recipeIds: number
           if (response.status === 201 || response.status === 200) {
             ackedBatches.set(response.body.report.batchId, response.body.report.imported);
             pendingKeys.delete(key);
+            acknowledgedWrites.add(key);
+            if (erroredBatchKeys.has(key) && response.body.report.replayed) replayedAfterError++;
             break;
           }
+          if (response.status >= 500 || response.status <= 0) erroredBatchKeys.add(key);
           await sleep(200);
         }
       }
@@ -150,12 +176,32 @@ async function databaseCrash(app: AppProcess, codes: string[], recipeIds: number
   record(scenario, `${ackedBatches.size} acknowledged CSV batches (${batchRows.length} stored)`, `${ackedPresent} complete, ${half.length} half-imported`, ackedPresent === ackedBatches.size && half.length === 0);
   const duplicates = await sequelize.query<{ k: string; n: number }>("SELECT idempotency_key AS k, COUNT(*) AS n FROM import_batches WHERE idempotency_key LIKE 'crash-%' GROUP BY idempotency_key HAVING COUNT(*) > 1", { type: QueryTypes.SELECT });
   record(scenario, 'retried batches (same Idempotency-Key)', `${duplicates.length} keys imported twice`, duplicates.length === 0);
+
+  // Writes that committed although their client saw an error: a retry answered as a replay
+  // (the first attempt had committed), or a write the client gave up on that is in the database.
+  const notes = [...erroredObservationNotes].filter((n) => !acknowledgedWrites.has(n));
+  const abandonedSingles = notes.length
+    ? (await sequelize.query<{ notes: string }>('SELECT DISTINCT notes FROM observations WHERE notes IN (:notes)', { replacements: { notes }, type: QueryTypes.SELECT })).length
+    : 0;
+  const keys = [...erroredBatchKeys].filter((k) => !acknowledgedWrites.has(k));
+  const abandonedBatches = keys.length ? await ImportBatch.count({ where: { idempotencyKey: { [Op.in]: keys } } }) : 0;
+  const committedDespiteError = replayedAfterError + abandonedSingles + abandonedBatches;
+  record(
+    scenario,
+    `writes whose client saw an error (${erroredObservationNotes.size} single observations, ${erroredBatchKeys.size} batches)`,
+    `${committedDespiteError} had committed all the same: ${replayedAfterError} came back as a replay on retry, ${abandonedSingles + abandonedBatches} given up by the client but stored`,
+    true,
+  );
+  const singleDuplicates = await sequelize.query<{ notes: string }>("SELECT notes FROM observations WHERE notes LIKE 'client % write %' GROUP BY notes HAVING COUNT(*) > 1", { type: QueryTypes.SELECT });
+  record(scenario, 'retried single observations (same Idempotency-Key)', `${singleDuplicates.length} written twice`, singleDuplicates.length === 0);
   await sequelize.close();
 }
 
 /** The app is killed with SIGKILL while a large import runs; the client retries with the same key. */
 async function appCrash(app: AppProcess, codes: string[]) {
   const scenario = 'app kill -9 during an import';
+  let unanswered = 0;
+  let committedUnanswered = 0;
   for (const delay of [20, 150, 600, 2500]) {
     const key = `appkill-${delay}-${randomBytes(4).toString('hex')}`;
     const csv = csvFor(codes, 3000, key);
@@ -172,8 +218,13 @@ async function appCrash(app: AppProcess, codes: string[]) {
     const rows = batches.length ? await Observation.count({ where: { importBatchId: { [Op.in]: batches.map((b) => b.id) } } }) : 0;
     await sequelize.close();
     const held = batches.length === 1 && rows === 3000 && (retry.status === 200 || retry.status === 201);
+    if (firstAnswer.status <= 0 || firstAnswer.status >= 500) {
+      unanswered++;
+      if (retry.body?.report?.replayed) committedUnanswered++;
+    }
     record(scenario, `kill after ${delay} ms (first answer ${firstAnswer.status || 'none'}), retry`, `retry ${retry.status}${retry.body?.report?.replayed ? ' (replayed)' : ''}; ${batches.length} batch, ${rows} rows`, held);
   }
+  record(scenario, `imports whose client got no answer or an error (${unanswered})`, `${committedUnanswered} had committed all the same and came back as a replay, without a second batch`, true);
 }
 
 /** 50 approvals and returns fired at once at the same submitted shortlists. */

@@ -20,10 +20,10 @@ export class Client {
         signal: AbortSignal.timeout(timeoutMs),
       });
       const text = await response.text();
-      return { status: response.status, body: text ? safeJson(text) : null, ms: performance.now() - started };
+      return { status: response.status, body: text ? safeJson(text) : null, ms: performance.now() - started, replayed: response.headers.get('idempotent-replayed') === 'true' };
     } catch (error) {
       const name = (error as Error).name;
-      return { status: name === 'TimeoutError' ? -1 : 0, body: null, ms: performance.now() - started };
+      return { status: name === 'TimeoutError' ? -1 : 0, body: null, ms: performance.now() - started, replayed: false };
     }
   }
 
