@@ -6,6 +6,7 @@ import { startMailCatcher, type MailCatcher } from './mail/catcher';
 import { catcherCredentials } from './mail/catcher-credentials';
 import { createMailer, storeCaughtMail } from './mail/mailer';
 import { migrateUp } from './migrator';
+import { rederiveOutdatedPredictions } from './services/physics-upgrade';
 
 export interface RunningGelwright {
   url: string;
@@ -20,7 +21,10 @@ export interface RunningGelwright {
 export async function startGelwright(config: Config, options: { clientDir?: string; migrate?: boolean } = {}): Promise<RunningGelwright> {
   const sequelize = createSequelize(config);
   await sequelize.authenticate();
-  if (options.migrate ?? true) await migrateUp(sequelize);
+  if (options.migrate ?? true) {
+    await migrateUp(sequelize);
+    await rederiveOutdatedPredictions(sequelize);
+  }
   let catcher: MailCatcher | null = null;
   if (config.MAIL_CATCHER) {
     catcher = await startMailCatcher({

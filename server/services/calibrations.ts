@@ -1,5 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
-import { CalibrationRefused, fitCalibration, type CalibrationObservation } from '../../shared/calibration';
+import { CalibrationRefused, type CalibrationObservation } from '../../shared/calibration';
+import type { CalibrationFit } from '../../shared/calibration/types';
+import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import { PHYSICS_MODEL_VERSION, PhysicsArgumentError, type StateMap } from '../../shared/physics';
 import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
@@ -124,11 +126,15 @@ export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, inp
   const programme = await requireProgramme(programmeId, ctx.transaction, 'param');
   if (programme.archivedAt) throw conflict('The programme is archived; restore it before calibrating');
   const observations = await calibrationObservations(programmeId, ctx.transaction);
-  let result;
+  const { HEAVY_JOBS_PER_USER, HEAVY_JOB_SECONDS } = ctx.deps.config;
+  let result: CalibrationFit;
   try {
-    result = fitCalibration(observations, { parameters: input.parameters, folds: input.folds });
+    // In a worker thread: a fit on tens of thousands of observations takes seconds of CPU.
+    result = await withHeavyJobSlot(ctx.user!.id, HEAVY_JOBS_PER_USER, () =>
+      runInWorker<CalibrationFit>('calibrationFit', { observations, options: { parameters: input.parameters, folds: input.folds } }, HEAVY_JOB_SECONDS * 1000),
+    );
   } catch (error) {
-    if (error instanceof CalibrationRefused) throw refusal(error);
+    if (error instanceof HeavyJobFailed && error.refused) throw refusal(new CalibrationRefused(error.refused.reason as CalibrationRefused['reason'], error.message, error.refused.counts as Record<string, number>));
     throw error;
   }
   const fit = result.fit;
@@ -166,8 +172,7 @@ export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, inp
  * holds predictions from two calibrations. Rows are locked for update in id order; the stored
  * recipe keeps its updatedAt (no one edited it).
  */
-async function recomputePredictions(ctx: Ctx, programmeId: number): Promise<PredictionRecompute> {
-  const transaction = ctx.transaction!;
+export async function recomputePredictions(transaction: Transaction, programmeId: number): Promise<PredictionRecompute> {
   const { parameters, calibration } = await programmeParameters(programmeId, transaction);
   const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
   const materials = await materialsOf(recipes, transaction);
@@ -222,7 +227,7 @@ export async function acceptCalibration(ctx: Ctx, programmeId: number, id: numbe
   }
   calibration.set({ status: 'accepted', acceptedBy: ctx.user!.id, acceptedAt: now });
   await calibration.save({ transaction });
-  const recomputed = await recomputePredictions(ctx, programmeId);
+  const recomputed = await recomputePredictions(ctx.transaction!, programmeId);
   await ctx.audit({
     action: 'calibration.accepted',
     entityType: 'calibration',
@@ -241,7 +246,7 @@ export async function withdrawCalibration(ctx: Ctx, programmeId: number) {
   if (!accepted) throw conflict('No calibration is in use: the programme already predicts with the uncalibrated theory');
   accepted.set({ status: 'withdrawn', endedBy: ctx.user!.id, endedAt: new Date() });
   await accepted.save({ transaction });
-  const recomputed = await recomputePredictions(ctx, programmeId);
+  const recomputed = await recomputePredictions(ctx.transaction!, programmeId);
   await ctx.audit({ action: 'calibration.withdrawn', entityType: 'calibration', entityId: accepted.id, details: { programmeId, ...recomputed } });
   return { calibration: await loadCalibration(programmeId, accepted.id, transaction), recomputed };
 }

@@ -112,7 +112,7 @@ export type {
   StateMapOptions,
   StateRegions,
 } from './map/types';
-export { DEFAULT_CLASSIFIER_PARAMETERS, resolveClassifierParameters } from './map/classifier-parameters';
+export { DEFAULT_CLASSIFIER_PARAMETERS, GEL_THRESHOLD_SOURCE, resolveClassifierParameters } from './map/classifier-parameters';
 export { buildStateMap, SIMULATION_CRITICAL_POINT } from './map/build-state-map';
 export { DEFAULT_STRONGEST_B2 } from './map/build-axis';
 export { SHORT_RANGE_LIMIT, attractionRangeOfModel, highestGlassPhi } from './map/glass-line-table';

@@ -28,7 +28,7 @@ describe('buildStateMap', () => {
       const numbers = allNumbers(map);
       expect(numbers.length).toBeGreaterThan(1000);
       expect(numbers.every(Number.isFinite)).toBe(true);
-      expect(map.modelVersion).toBe('gw-physics-1');
+      expect(map.modelVersion).toBe('gw-physics-2');
     }
   });
 

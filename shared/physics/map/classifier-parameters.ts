@@ -25,6 +25,9 @@ import type { ClassifierParameters } from './types';
 /** Highest observed glass φ accepted: the rescaled re-entrant nose (×1.082 of it) stays below φ_cp. */
 export const MAX_GLASS_PHI = 0.66;
 
+/** Where the default gel threshold comes from, in words a screen can show beside it. */
+export const GEL_THRESHOLD_SOURCE = 'the gas–liquid critical B2* ≈ −1.5, because Lu et al. (Nature 453, 499 (2008)) saw short-range attractive colloids gel wherever the quench entered the two-phase region';
+
 export const DEFAULT_CLASSIFIER_PARAMETERS: Readonly<ClassifierParameters> = Object.freeze({
   attractionShift: 0,
   gelB2Threshold: -1.5,

@@ -4,8 +4,7 @@ import type { MapFrame } from './map-frame';
 import type { ClassifierParameters, GlassLineMapping, GlassLineSource, LevelCurve, MapModel } from './types';
 
 /**
- * Longest attraction range (in particle diameters: q for depletion, λ − 1 for a square well)
- * placed by adhesive-sphere mode-coupling theory through B2*. The extended law of corresponding
+ * Longest attraction range (in particle radii for depletion: q = R_g/a) placed by adhesive-sphere mode-coupling theory through B2*. The extended law of corresponding
  * states holds for short ranges (Noro & Frenkel, J. Chem. Phys. 113, 2941 (2000), a few percent
  * of σ; common practice stretches it to about a quarter), and the re-entrant and attractive
  * glasses are short-range effects (Dawson et al., Phys. Rev. E 63, 011401 (2000)). Longer ranges
@@ -21,10 +20,13 @@ export function highestGlassPhi(map: { tables: { glass: { phi: number[] } } }): 
   return Math.max(...map.tables.glass.phi);
 }
 
-/** The range of a map model's attraction in σ, or null where the model places any attraction by B2*. */
+/**
+ * The range of a map model's attraction in σ (depletion: q), or null for the generic models,
+ * which place every attraction by its B2* as a short-range one (their U/kT axis is only a way of
+ * reading B2*).
+ */
 export function attractionRangeOfModel(model: MapModel): number | null {
-  if (model.kind === 'depletion') return model.q;
-  return model.axis === 'squareWellDepth' ? (model.lambda ?? 1.5) - 1 : null;
+  return model.kind === 'depletion' ? model.q : null;
 }
 
 /**

@@ -97,7 +97,7 @@ describe('deriveRecipeParameters', () => {
     ];
     for (const recipe of recipes) {
       const derived = deriveRecipeParameters(recipe);
-      expect(derived.modelVersion).toBe('gw-physics-1');
+      expect(derived.modelVersion).toBe('gw-physics-2');
       expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
       expect(['fluid', 'gel', 'glass', 'crystal', 'separated']).toContain(derived.predictedState);
       expect(derived.reason.length).toBeGreaterThan(10);

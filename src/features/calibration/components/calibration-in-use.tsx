@@ -1,4 +1,4 @@
-import { DEFAULT_CLASSIFIER_PARAMETERS } from '@shared/physics/map/classifier-parameters';
+import { DEFAULT_CLASSIFIER_PARAMETERS, GEL_THRESHOLD_SOURCE } from '@shared/physics/map/classifier-parameters';
 import type { CalibrationSummaryView } from '@shared/views/calibration';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -29,7 +29,7 @@ export function CalibrationInUse({
       <div className="text-sm" data-testid="calibration-in-use">
         <p className="font-medium text-ink">Uncalibrated theory</p>
         <p className="mt-1 text-ink-soft">
-          Predictions use the published theory with Gelwright's default rule: no attraction shift, and inside the binodal a gel below B2* = {formatSigned(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold, 0)}.
+          Predictions use the published theory with Gelwright's default rule: no attraction shift, and inside the binodal a gel at or below B2* = {formatSigned(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold, 1)} ({GEL_THRESHOLD_SOURCE}).
         </p>
       </div>
     );
@@ -44,7 +44,9 @@ export function CalibrationInUse({
         <dt>Attraction shift</dt>
         <dd className="tabular-nums text-ink">{formatEstimate(inUse.attractionShift)} in B2*</dd>
         <dt>Gel threshold</dt>
-        <dd className="tabular-nums text-ink">{inUse.gelB2Threshold ? `B2* ${formatEstimate(inUse.gelB2Threshold)}` : `B2* ${formatSigned(inUse.parameters.gelB2Threshold, 0)} (theory, not fitted)`}</dd>
+        <dd className="tabular-nums text-ink">{inUse.gelB2Threshold ? `B2* ${formatEstimate(inUse.gelB2Threshold)}` : `B2* ${formatSigned(inUse.parameters.gelB2Threshold, 1)} (default, not fitted)`}</dd>
+        <dt>Default</dt>
+        <dd className="text-ink" data-testid="gel-threshold-default">B2* {formatSigned(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold, 1)}: {GEL_THRESHOLD_SOURCE}</dd>
         <dt>Fitted to</dt>
         <dd className="text-ink">{inUse.observationsUsed} observations, {formatDate(inUse.fittedAt)}</dd>
       </dl>

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import type { LeftOutReason } from '@shared/calibration/types';
+import { DEFAULT_CLASSIFIER_PARAMETERS, GEL_THRESHOLD_SOURCE } from '@shared/physics/map/classifier-parameters';
 import { CALIBRATION_STATUS_LABELS, type CalibrationView } from '@shared/views/calibration';
 import { Button } from '@/components/ui/button';
 import { Badge } from '@/components/ui/page';
@@ -63,9 +64,12 @@ export function CalibrationResult({
             </>
           ) : (
             <dd className="text-lg tabular-nums text-ink">
-              {formatSigned(calibration.parameters.gelB2Threshold, 0)} <span className="text-sm text-ink-soft">held at the theory's value</span>
+              {formatSigned(calibration.parameters.gelB2Threshold, 1)} <span className="text-sm text-ink-soft">held, not fitted</span>
             </dd>
           )}
+          <dd className="text-xs text-ink-soft" data-testid="gel-threshold-default">
+            Default B2* {formatSigned(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold, 1)}: {GEL_THRESHOLD_SOURCE}.
+          </dd>
         </div>
         <div>
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Observations used</dt>

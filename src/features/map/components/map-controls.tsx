@@ -55,6 +55,14 @@ export function MapControls({ view, onChange, depletion }: { view: MapView; onCh
           )}
         </Field>
       )}
+      <Field label="Glass line (mode coupling)" className="w-60">
+        {(p) => (
+          <SelectInput {...p} value={view.glassLine} onChange={(e) => onChange({ glassLine: e.target.value as MapView['glassLine'] })}>
+            <option value="rescaled">Rescaled to observed φ_g = 0.58</option>
+            <option value="computed">As computed (hard spheres 0.516)</option>
+          </SelectInput>
+        )}
+      </Field>
       <Field label="Observed from day" className="w-32">
         {(p) => <TextInput {...p} type="number" min={0} defaultValue={view.minAge ?? ''} onBlur={(e) => onChange({ minAge: e.target.value === '' ? null : Math.max(0, Number(e.target.value)) })} />}
       </Field>

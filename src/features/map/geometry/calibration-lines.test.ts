@@ -3,6 +3,8 @@ import { gelOnset } from '@shared/calibration/gel-onset';
 import { gelOnsetProfile } from '@shared/calibration/gel-onset-profile';
 import { Z_95 } from '@shared/calibration/wald-estimate';
 import { buildStateMap } from '@shared/physics/map/build-state-map';
+import { DEFAULT_CLASSIFIER_PARAMETERS } from '@shared/physics/map/classifier-parameters';
+import { highestGlassPhi } from '@shared/physics/map/glass-line-table';
 import { calibrationLines } from './calibration-lines';
 
 // Expected positions are derived from the rule itself: the gel boundary at φ is the B2* where a
@@ -31,12 +33,13 @@ describe('calibrationLines', () => {
   });
 
   it('adds the uncalibrated boundary when the map itself is drawn calibrated, and breaks where no gel is reached', () => {
-    const lines = calibrationLines(map, profile, calibration, true);
+    // The default gel threshold, so that the two lines differ by the shift alone.
+    const lines = calibrationLines(map, profile, { ...calibration, parameters: { attractionShift: 0.5, gelB2Threshold: DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold } }, true);
     const theoryLine = lines.find((l) => l.id === 'theory-gel')!;
     const i = profile.findIndex((p) => p.phi > 0.25);
     expect(-theoryLine.points[i][1]).toBeCloseTo(-lines[0].points[i][1] - 0.5, 3);
     // Beyond the glass line no φ is sampled; every sampled φ below it is inside the binodal at the top here.
-    expect(profile.every((p) => p.phi < 0.58)).toBe(true);
+    expect(profile.every((p) => p.phi < highestGlassPhi(map))).toBe(true);
     expect(theoryLine.points.filter(([, y]) => Number.isNaN(y)).length).toBe(profile.filter((p) => p.onset.binodalB2 === null).length);
   });
 });

@@ -78,8 +78,8 @@ describe('viewport arithmetic', () => {
 
 describe('map view in the URL', () => {
   it('round-trips axis, theory, range, layers, zoom and age window', () => {
-    const view = parseMapView(new URLSearchParams('axis=squareWellDepth&theory=baxterPY&lambda=1.25&layers=lines,recipes&zoom=0.1,0.4,2,6&minAge=7&maxAge=30&programme=3'), 'b2');
-    expect(view).toMatchObject({ axis: 'squareWellDepth', theory: 'baxterPY', lambda: 1.25, zoom: { x: [0.1, 0.4], y: [2, 6] }, minAge: 7, maxAge: 30 });
+    const view = parseMapView(new URLSearchParams('axis=squareWellDepth&theory=baxterPY&lambda=1.25&layers=lines,recipes&zoom=0.1,0.4,2,6&minAge=7&maxAge=30&glass=computed&programme=3'), 'b2');
+    expect(view).toMatchObject({ axis: 'squareWellDepth', theory: 'baxterPY', lambda: 1.25, zoom: { x: [0.1, 0.4], y: [2, 6] }, minAge: 7, maxAge: 30, glassLine: 'computed' });
     expect([...view.layers]).toEqual(['lines', 'recipes']);
     const written = writeMapView(new URLSearchParams('programme=3'), view);
     expect(parseMapView(written, 'b2')).toEqual(view);

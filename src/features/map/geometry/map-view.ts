@@ -1,3 +1,4 @@
+import type { GlassLineMapping } from '@shared/physics/map/types';
 import type { Viewport } from './types';
 
 export type AxisChoice = 'b2' | 'inverseTau' | 'squareWellDepth' | 'polymerReservoir';
@@ -15,6 +16,8 @@ export interface MapView {
   calibrated: boolean;
   minAge: number | null;
   maxAge: number | null;
+  /** The glass line rescaled onto the observed hard-sphere φ_g (default) or as MCT computes it. */
+  glassLine: GlassLineMapping;
 }
 
 export const DEFAULT_LAYERS: Layer[] = ['regions', 'lines', 'recipes', 'observations', 'mismatches', 'labels', 'calibrated'];
@@ -45,6 +48,7 @@ export function parseMapView(params: URLSearchParams, defaultAxis: AxisChoice): 
     calibrated: params.get('calibrated') !== 'false',
     minAge: optionalNumber(params.get('minAge')),
     maxAge: optionalNumber(params.get('maxAge')),
+    glassLine: params.get('glass') === 'computed' ? 'computed' : 'rescaled',
   };
 }
 
@@ -60,6 +64,8 @@ export function writeMapView(params: URLSearchParams, view: MapView): URLSearchP
   else next.delete('zoom');
   if (!view.calibrated) next.set('calibrated', 'false');
   else next.delete('calibrated');
+  if (view.glassLine === 'computed') next.set('glass', 'computed');
+  else next.delete('glass');
   for (const key of ['minAge', 'maxAge'] as const) {
     if (view[key] === null) next.delete(key);
     else next.set(key, String(view[key]));

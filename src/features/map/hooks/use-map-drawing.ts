@@ -31,10 +31,11 @@ export function modelFor(view: MapView, sizeRatio: number | null): MapModel {
 export function useStateMapDrawing(request: MapRequest): { map: StateMap; drawing: MapDrawing; error: null } | { map: null; drawing: null; error: Error } {
   const model = modelFor(request.view, request.sizeRatio);
   const yMax = axisTop(model, request.strongest);
-  const key = JSON.stringify([model, request.parameters ?? null, request.polydispersity ?? null, yMax ?? null]);
+  const glassLine = request.view.glassLine;
+  const key = JSON.stringify([model, request.parameters ?? null, request.polydispersity ?? null, yMax ?? null, glassLine]);
   return useMemo(() => {
     try {
-      const map = buildStateMap(model, { parameters: request.parameters, polydispersity: request.polydispersity, yMax });
+      const map = buildStateMap(model, { parameters: request.parameters, polydispersity: request.polydispersity, yMax, glassLine });
       return { map, drawing: drawingFromStateMap(map), error: null };
     } catch (error) {
       return { map: null, drawing: null, error: error as Error };
