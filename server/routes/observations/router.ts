@@ -1,14 +1,14 @@
-import { stringify } from 'csv-stringify/sync';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/common';
-import { IMPORT_COLUMNS, observationInputSchema, observationListQuerySchema } from '../../../shared/schemas/observations';
+import { observationInputSchema, observationListQuerySchema } from '../../../shared/schemas/observations';
 import { badRequest } from '../../errors';
 import { route } from '../../http/route';
 import { Observation } from '../../models';
 import { presentObservation } from '../../presenters/observation';
 import { attachmentUpload, csvUpload, sniff, storeBytes } from '../../services/attachments';
-import { escapeCell } from '../../services/csv-cells';
 import { importObservations } from '../../services/observation-import';
+import { streamObservationCsv } from '../../services/observation-export';
+import { withHeavyJobSlot } from '../../services/heavy-jobs';
 import { archiveObservation, recordObservationOnce, loadObservation, lockOwnObservation, observationIncludes, observationWhere, requireOwnObservation, updateObservation } from '../../services/observations';
 import { Attachment } from '../../models';
 import { presentAttachment } from '../../presenters/observation';
@@ -37,17 +37,10 @@ export const observationRoutes = [
     method: 'get',
     path: '/api/observations/export',
     access: 'data.read',
-    summary: 'The bench log as CSV (formula-looking cells escaped)',
+    summary: 'The bench log as CSV (formula-looking cells escaped), streamed page by page',
     query: observationListQuerySchema.omit({ page: true, pageSize: true }),
-    async handler({ query, res }) {
-      const rows = await Observation.findAll({ where: observationWhere({ ...query, page: 1, pageSize: 1 }), include: observationIncludes(), order: [['mixedAt', 'ASC'], ['id', 'ASC']] });
-      const header = [...IMPORT_COLUMNS, 'predicted_state', 'agrees', 'observer', 'observation_id'];
-      const lines = rows.map(presentObservation).map((o) =>
-        [o.recipeCode ?? '', o.mixedAt.slice(0, 10), o.ageDays, o.observedState, o.method, o.storageModulusPa, o.yieldStressPa, o.settledHeightPct, o.notes ?? '', o.predictedState ?? '', o.agrees === null ? '' : o.agrees ? 'yes' : 'no', o.observer?.name ?? '', o.id].map(escapeCell),
-      );
-      res.setHeader('Content-Type', 'text/csv; charset=utf-8');
-      res.setHeader('Content-Disposition', `attachment; filename="gelwright-bench-log-${new Date().toISOString().slice(0, 10)}.csv"`);
-      res.send(stringify([header, ...lines]));
+    async handler({ query, res, user, deps }) {
+      await withHeavyJobSlot(user!.id, deps.config.HEAVY_JOBS_PER_USER, () => streamObservationCsv({ ...query, page: 1, pageSize: 1 }, res));
     },
   }),
   route({
