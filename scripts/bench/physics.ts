@@ -7,7 +7,16 @@
  *
  * Run: ./node_modules/.bin/tsx scripts/bench/physics.ts   (or npm run bench:physics)
  */
-import { buildStateMap, classifyPoint, type AttractionInput, type MapModel, type StateMap } from '../../shared/physics';
+import {
+  buildStateMap,
+  classifyPoint,
+  clearModeCouplingGlassLines,
+  modeCouplingGlassLine,
+  modeCouplingGlassTransition,
+  type AttractionInput,
+  type MapModel,
+  type StateMap,
+} from '../../shared/physics';
 
 const WARM_UP = 3;
 const BUILD_RUNS = 11;
@@ -105,8 +114,44 @@ function benchClassification(model: MapModel): void {
   }
 }
 
+const GLASS_LINE_TARGET_MS = 300;
+const MEAN_FIELD_MAP_TARGET_MS = 5;
+const FREE_VOLUME_MAP_TARGET_MS = 10;
+
+/** Mode-coupling theory: the hard-sphere transition on a few grids and the map's glass line. */
+function benchModeCoupling(): void {
+  console.log('Mode-coupling glass transition of hard spheres (Percus–Yevick S(k), k_max σ = 40; bisection to 1e-5)');
+  for (const points of [50, 100, 200]) {
+    let phi: number | null = null;
+    const elapsed = time(() => (phi = modeCouplingGlassTransition(Infinity, { points, tolerance: 1e-5 }).phi));
+    console.log(`  M = ${String(points).padStart(3)}: φ_c = ${phi!.toFixed(6)}  (${elapsed.toFixed(0)} ms)${points === 100 ? '   published 0.515912 (Franosch et al. 1997)' : ''}`);
+  }
+  const times: number[] = [];
+  let iterations = 0;
+  for (let run = 0; run < 5; run++) {
+    clearModeCouplingGlassLines();
+    times.push(time(() => (iterations = modeCouplingGlassLine().iterations)));
+  }
+  const line = modeCouplingGlassLine();
+  console.log(`Glass line for a map (40 stickiness levels, M = 100, cold: no cache); median of 5 runs`);
+  console.log(`  median ${median(times).toFixed(0)} ms (min ${Math.min(...times).toFixed(0)}, max ${Math.max(...times).toFixed(0)}; ${iterations} fixed-point iterations)  target < ${GLASS_LINE_TARGET_MS} ms: ${verdict(median(times), GLASS_LINE_TARGET_MS)}`);
+  console.log(`  cached afterwards: ${time(() => modeCouplingGlassLine()).toFixed(3)} ms; nose at τ = ${line.tau[line.nose].toFixed(3)}, φ_c = ${line.phi[line.nose].toFixed(4)}; hard spheres ${line.hardSpherePhi.toFixed(4)}`);
+}
+
+/** The two map builds the arrest issue sets targets for (the glass line is cached by then). */
+function benchArrestMapTargets(): void {
+  console.log('Map build without the glass line (cached), against the arrest issue\'s targets; median of 11 runs');
+  for (const [model, target] of [[{ kind: 'generic', theory: 'meanField', axis: 'b2' }, MEAN_FIELD_MAP_TARGET_MS], [{ kind: 'depletion', q: 0.5 }, FREE_VOLUME_MAP_TARGET_MS]] as Array<[MapModel, number]>) {
+    for (let i = 0; i < WARM_UP; i++) buildStateMap(model);
+    const builds = Array.from({ length: BUILD_RUNS }, () => time(() => buildStateMap(model)));
+    console.log(`  ${describeModel(model).padEnd(36)} median ${median(builds).toFixed(1).padStart(6)} ms  target < ${target} ms: ${verdict(median(builds), target)}`);
+  }
+}
+
 console.log(`Gelwright physics benchmark — Node ${process.version}, ${new Date().toISOString()}`);
 benchBuilds();
+benchArrestMapTargets();
+benchModeCoupling();
 console.log(`Classification of ${POINTS.toLocaleString('en')} points against one prebuilt map; median of ${CLASSIFY_RUNS} runs after one first pass`);
 benchClassification({ kind: 'generic', theory: 'meanField', axis: 'b2' });
 benchClassification({ kind: 'depletion', q: 0.35 });

@@ -54,6 +54,7 @@ export function modeCouplingGlassLine(options: { points?: number; cutoff?: numbe
   let iterations = 0;
   let nose = 0;
   let held: number | null = null;
+  let curvature: number | undefined;
   for (let i = 0; i < tau.length; i++) {
     if (held !== null) {
       computedPhi.push(NaN);
@@ -61,7 +62,10 @@ export function modeCouplingGlassLine(options: { points?: number; cutoff?: numbe
     }
     const previous = computedPhi[i - 1] ?? 0.5;
     const trend = i >= 2 ? Math.max(-0.03, Math.min(0.03, computedPhi[i - 1] - computedPhi[i - 2])) : 0;
-    const located = locateGlassTransition(tau[i], grid, previous + trend - 0.003, 1e-3);
+    // Neighbouring levels share the curvature of the square-root law: every other level reuses
+    // the one measured just below it (two probes instead of three) and the next measures afresh.
+    const located = locateGlassTransition(tau[i], grid, previous + trend - 0.003, 1e-3, undefined, curvature);
+    curvature = curvature === undefined ? located.curvature : undefined;
     iterations += located.iterations;
     if (computedPhi[nose] > located.phi && located.blocked) {
       // Past the nose and no longer evaluable: hold the last clean value from here on.

@@ -15,6 +15,8 @@ export interface ArrestProbe {
   readonly arrested: boolean;
   readonly g: number;
   readonly iterations: number;
+  /** The last iterate (an upper bound of the largest solution). */
+  readonly f: Float64Array;
 }
 
 /** The ratio has settled when it moves by less than this between two iterations. */
@@ -32,17 +34,19 @@ export const LONG_WAVELENGTH_LIMIT = 1;
 const MAX_ITERATIONS = 20_000;
 
 /**
- * Iterate f ← m[f]/(1 + m[f]) from f = 1 until the state is decided: ergodic when every f_q
+ * Iterate f ← m[f]/(1 + m[f]) from f = 1 (or from `start`, which must lie above the largest
+ * solution: the iterate of an arrested state at the same τ and higher φ does, as f grows with φ)
+ * until the state is decided: ergodic when every f_q
  * falls below 1e-4; arrested once the convergence ratio r has settled below 1 and the geometric
  * tail change·r/(1 − r) cannot bring max f near zero. `null` where Percus–Yevick has no solution
  * or S(0) exceeds LONG_WAVELENGTH_LIMIT.
  */
-export function probeArrest(phi: number, tau: number, grid: ModeCouplingGrid): ArrestProbe | null {
+export function probeArrest(phi: number, tau: number, grid: ModeCouplingGrid, start?: Float64Array): ArrestProbe | null {
   const lambda = tau === Infinity ? 0 : baxterLambdaUnchecked(phi, tau);
   if (lambda === null || structureFactorUnchecked(phi, lambda, 0) > LONG_WAVELENGTH_LIMIT) return null;
   const vertex = modeCouplingVertex(phi, lambda, grid);
   const n = grid.points;
-  const f = new Float64Array(n).fill(1);
+  const f = start ? Float64Array.from(start) : new Float64Array(n).fill(1);
   const m = new Float64Array(n);
   const scratch = memoryScratch(n);
   let previousChange = NaN;
@@ -58,14 +62,14 @@ export function probeArrest(phi: number, tau: number, grid: ModeCouplingGrid): A
       if (next > largest) largest = next;
       f[i] = next;
     }
-    if (largest < DECAYED) return { arrested: false, g: NaN, iterations: iteration };
+    if (largest < DECAYED) return { arrested: false, g: NaN, iterations: iteration, f };
     const rate = change / previousChange;
-    if (change === 0) return { arrested: true, g: 1, iterations: iteration };
+    if (change === 0) return { arrested: true, g: 1, iterations: iteration, f };
     if (iteration > 8 && rate < 1 && Math.abs(rate - previousRate) < RATE_SETTLED && (change * rate) / (1 - rate) < TAIL_SHARE * largest) {
-      return { arrested: true, g: (1 - rate) * (1 - rate), iterations: iteration };
+      return { arrested: true, g: (1 - rate) * (1 - rate), iterations: iteration, f };
     }
     previousChange = change;
     previousRate = rate;
   }
-  return { arrested: true, g: 0, iterations: MAX_ITERATIONS };
+  return { arrested: true, g: 0, iterations: MAX_ITERATIONS, f };
 }
