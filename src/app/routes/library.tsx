@@ -3,6 +3,7 @@ import { can } from '@shared/permissions';
 import { PageHeader } from '@/components/ui/page';
 import { useSession } from '@/features/auth/api/get-session';
 import { isMaterialKind, LibraryScreen } from '@/features/library/components/library-screen';
+import { LineSources } from '@/features/map/components/line-sources';
 
 export function LibraryRoute() {
   const { data: user } = useSession();
@@ -20,6 +21,9 @@ export function LibraryRoute() {
         }`}
       />
       <LibraryScreen kind={kind} canWrite={canWrite} onKindChange={(next) => setParams({ kind: next }, { replace: true })} />
+      <section className="mt-6 rounded-md border border-line bg-panel p-4" aria-label="Where the map's lines come from">
+        <LineSources title="How these materials become a state map: where each line comes from" />
+      </section>
     </>
   );
 }

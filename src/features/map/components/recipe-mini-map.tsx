@@ -7,6 +7,7 @@ import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { axisTop } from '../hooks/use-map-drawing';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
+import { LineSources } from './line-sources';
 import { StaticStateMap } from './state-map';
 
 const LAYERS = new Set<Layer>(DEFAULT_LAYERS.filter((l) => l !== 'labels'));
@@ -43,6 +44,9 @@ export function RecipeMiniMap({ map: predictionMap, derived, code, observations 
         ariaLabel={`State map of recipe ${code}: ${drawing.modelLabel}; predicted ${derived.predictedState ?? 'unknown'}`}
       />
       {y !== null && y > highest && <p className="mt-1 text-xs text-ink-soft">The recipe's attraction is stronger than the top of this map; it is not drawn.</p>}
+      <div className="mt-2">
+        <LineSources notes={map.notes} title="Where this map's lines come from" />
+      </div>
     </div>
   );
 }
