@@ -165,6 +165,18 @@ describe('modeCouplingGlassTransition', () => {
     expect(transition).toMatchObject({ points: 100, cutoff: 40 });
   });
 
+  it('maps a short-range square well to the adhesive spheres of equal B2*, and long-range depletion to hard spheres (the stated mapping)', () => {
+    // λ = 1.03, U = 2.5 kT: B2* = 1 − (1.03³ − 1)(e^2.5 − 1) = −0.0368… (square-well closed form), τ = 0.2411.
+    const well = modeCouplingGlassTransition({ kind: 'squareWell', depth: 2.5, lambda: 1.03 });
+    const b2 = 1 - (1.03 ** 3 - 1) * (Math.exp(2.5) - 1);
+    expect(well.mapping).toBe('sticky');
+    expect(well.tau).toBeCloseTo(1 / (4 * (1 - b2)), 12);
+    expect(well.phi).toBeCloseTo(modeCouplingGlassTransition(1 / (4 * (1 - b2))).phi!, 10);
+    const longRange = modeCouplingGlassTransition({ kind: 'depletion', q: 1, polymerReservoir: 0.3 });
+    expect(longRange).toMatchObject({ mapping: 'hardSphere', tau: Infinity });
+    expect(Math.abs(longRange.phi! - 0.5159)).toBeLessThan(2e-4);
+  });
+
   it('is re-entrant for adhesive spheres: weak stickiness melts the glass, strong stickiness arrests lower (Bergenholtz & Fuchs 1999; Dawson et al. 2000; shape only)', () => {
     const hardSpheres = 0.5159;
     expect(modeCouplingGlassTransition(1).phi!).toBeGreaterThan(hardSpheres + 0.02);

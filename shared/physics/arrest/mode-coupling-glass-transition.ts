@@ -6,7 +6,11 @@ import { DEFAULT_MODE_COUPLING_GRID, modeCouplingGrid, type ModeCouplingGrid } f
 import { iterateNonergodicity } from './mode-coupling-nonergodicity';
 import { LONG_WAVELENGTH_LIMIT } from './mode-coupling-probe';
 import { modeCouplingVertex } from './mode-coupling-vertex';
+import { stickinessFromReducedB2 } from '../attraction/stickiness-from-reduced-b2';
+import { attractionToReducedB2 } from '../map/attraction-to-reduced-b2';
+import type { AttractionInput } from '../map/types';
 import { structureFactorUnchecked } from './baxter-sticky-structure-factor';
+import { SHORT_RANGE_LIMIT } from './short-range-limit';
 
 export interface GlassTransitionOptions {
   /** Grid points M (default 100). */
@@ -20,7 +24,13 @@ export interface GlassTransitionOptions {
 export interface GlassTransition {
   /** φ_c of idealised MCT on this grid, or null when no arrest was found below φ = 0.74. */
   readonly phi: number | null;
+  /** The adhesive-sphere stickiness the attraction was mapped to (Infinity: hard spheres). */
   readonly tau: number;
+  /**
+   * How the attraction was placed: 'sticky' (Baxter τ of equal B2*), or 'hardSphere' when it is
+   * too long-ranged (range > SHORT_RANGE_LIMIT) or not attractive (B2* ≥ 1).
+   */
+  readonly mapping: 'sticky' | 'hardSphere';
   readonly points: number;
   readonly cutoff: number;
   readonly tolerance: number;
@@ -37,19 +47,35 @@ export interface GlassTransition {
  * (1997) (hard spheres, φ_c = 0.515912 on M = 100, k_max σ = 40); J. Bergenholtz & M. Fuchs,
  * Phys. Rev. E 59, 5706 (1999) (sticky spheres, re-entrant line).
  *
- * @param tau stickiness τ > 0 or Infinity.
+ * Any other short-range attraction (square well, Asakura–Oosawa depletion, a B2*) is mapped to
+ * the adhesive spheres of equal B2*, τ = 1/(4(1 − B2*)) (extended law of corresponding states,
+ * Noro & Frenkel 2000); the grid's cut-off k_max stands in for the finite range. An attraction
+ * longer than SHORT_RANGE_LIMIT (square-well λ − 1 or depletion q above 0.25) is given the
+ * hard-sphere transition: the adhesive-sphere glasses are short-range effects.
+ *
+ * @param attraction stickiness τ > 0 or Infinity, or an AttractionInput.
  * @param options grid (points 20–2000, cutoff 10–400) and tolerance.
- * @throws PhysicsArgumentError naming tau, options.tolerance, points or cutoff.
+ * @throws PhysicsArgumentError naming tau, the attraction's field, options.tolerance, points or cutoff.
  * @example modeCouplingGlassTransition(Infinity).phi // 0.51591 (± 1e-4)
+ * @example modeCouplingGlassTransition({ kind: 'depletion', q: 1, polymerReservoir: 0.3 }).mapping // 'hardSphere'
  */
-export function modeCouplingGlassTransition(tau: number, options: GlassTransitionOptions = {}): GlassTransition {
-  requireStickiness('tau', tau);
+export function modeCouplingGlassTransition(attraction: number | AttractionInput, options: GlassTransitionOptions = {}): GlassTransition {
+  const { tau, mapping } = stickinessOfAttraction(attraction);
   const tolerance = requireInRange('options.tolerance', options.tolerance ?? 1e-4, 1e-7, 0.01, { what: 'a tolerance in φ', lowEnd: 'closed', highEnd: 'closed' });
   const grid = modeCouplingGrid(options.points ?? DEFAULT_MODE_COUPLING_GRID.points, options.cutoff ?? DEFAULT_MODE_COUPLING_GRID.cutoff);
-  const base = { tau, points: grid.points, cutoff: grid.cutoff, tolerance };
+  const base = { tau, mapping, points: grid.points, cutoff: grid.cutoff, tolerance };
   const located = locateGlassTransition(tau, grid, 0.5, 2e-3);
   if (located.phi >= GLASS_SEARCH_TOP) return { ...base, phi: null };
   return { ...base, phi: refineTransition(tau, grid, located.phi, tolerance) };
+}
+
+/** The adhesive-sphere stickiness an attraction is placed at (see modeCouplingGlassTransition). */
+function stickinessOfAttraction(attraction: number | AttractionInput): { tau: number; mapping: GlassTransition['mapping'] } {
+  if (typeof attraction === 'number') return { tau: requireStickiness('tau', attraction), mapping: attraction === Infinity ? 'hardSphere' : 'sticky' };
+  const b2 = attractionToReducedB2(attraction);
+  const range = attraction.kind === 'depletion' ? attraction.q : attraction.kind === 'squareWell' ? attraction.lambda - 1 : 0;
+  if (range > SHORT_RANGE_LIMIT || b2 >= 1) return { tau: Infinity, mapping: 'hardSphere' };
+  return { tau: stickinessFromReducedB2(b2), mapping: 'sticky' };
 }
 
 /** Bracket φ_c around an estimate with exact arrest decisions, then bisect. Internal. */

@@ -1,16 +1,10 @@
 import { modeCouplingGlassLine } from '../arrest/mode-coupling-glass-line';
+import { SHORT_RANGE_LIMIT } from '../arrest/short-range-limit';
 import { reducedB2FromStickiness } from '../attraction/reduced-b2-from-stickiness';
 import type { MapFrame } from './map-frame';
 import type { ClassifierParameters, GlassLineMapping, GlassLineSource, LevelCurve, MapModel } from './types';
 
-/**
- * Longest attraction range (in particle radii for depletion: q = R_g/a) placed by adhesive-sphere mode-coupling theory through B2*. The extended law of corresponding
- * states holds for short ranges (Noro & Frenkel, J. Chem. Phys. 113, 2941 (2000), a few percent
- * of σ; common practice stretches it to about a quarter), and the re-entrant and attractive
- * glasses are short-range effects (Dawson et al., Phys. Rev. E 63, 011401 (2000)). Longer ranges
- * keep the hard-sphere glass line and are placed by their own fluid–fluid theory.
- */
-export const SHORT_RANGE_LIMIT = 0.25;
+export { SHORT_RANGE_LIMIT };
 
 /**
  * The highest φ of a map's glass line (its nose): no gel can form at or above it, whatever the
