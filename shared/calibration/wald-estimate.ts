@@ -1,12 +1,8 @@
+import { Z_95 } from '../statistics/z-95';
 import type { Estimate } from './types';
 
-/**
- * z for a two-sided 95 % interval: the standard normal quantile at 0.975, 1.959963984540054
- * (standard normal tables, e.g. Abramowitz & Stegun, *Handbook of Mathematical Functions*
- * (1964), ch. 26). Written out rather than taken from simple-statistics' `probit`, whose
- * approximation of the inverse error function gives 1.9572 here.
- */
-export const Z_95 = 1.959963984540054;
+/** z for a two-sided 95 % interval, 1.959963984540054: defined once in shared/statistics/z-95.ts. */
+export { Z_95 };
 
 /**
  * A value with its standard error and the 95 % Wald interval value ± z₀.₉₇₅·SE.

@@ -1,5 +1,5 @@
-import { probit } from 'simple-statistics';
 import { attractionToMapY } from '../physics';
+import { Z_95 } from '../statistics/z-95';
 import type { GoalState } from '../states';
 import { mapPosition } from './map-position';
 import { membershipOffset } from './membership-offset';
@@ -11,8 +11,8 @@ import type { SampledComposition } from './sample-compositions';
 import { targetProbability } from './target-probability';
 import type { BoundaryUncertainty, CompositionSpace, ProposedExperiment } from './types';
 
-/** z of a two-sided 95 % band, the normal quantile at 0.975 (simple-statistics probit): 1.95996… */
-export const BAND_Z = probit(0.975);
+/** z of a two-sided 95 % band, the normal quantile at 0.975: 1.959963… (Z_95, shared/statistics/z-95.ts). */
+export const BAND_Z = Z_95;
 /** Compositions (the first ones of the plan's Halton sample) examined for experiments. */
 export const EXPERIMENT_POOL = 600;
 /** Informativeness × novelty below this is not worth a sample (e.g. within 0.01 of an observation). */
