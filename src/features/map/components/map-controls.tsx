@@ -55,7 +55,7 @@ export function MapControls({ view, onChange, depletion }: { view: MapView; onCh
           )}
         </Field>
       )}
-      <Field label="Glass line (mode coupling)" className="w-60">
+      <Field label="Glass line (mode coupling)" className="w-72">
         {(p) => (
           <SelectInput {...p} value={view.glassLine} onChange={(e) => onChange({ glassLine: e.target.value as MapView['glassLine'] })}>
             <option value="rescaled">Rescaled to observed φ_g = 0.58</option>
