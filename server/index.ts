@@ -6,6 +6,7 @@ import { startMailCatcher, type MailCatcher } from './mail/catcher';
 import { catcherCredentials } from './mail/catcher-credentials';
 import { createMailer, storeCaughtMail } from './mail/mailer';
 import { migrateUp } from './migrator';
+import { warmHeavyJobWorker } from './services/heavy-jobs';
 import { rederiveOutdatedPredictions } from './services/physics-upgrade';
 
 export interface RunningGelwright {
@@ -36,6 +37,7 @@ export async function startGelwright(config: Config, options: { clientDir?: stri
     });
   }
   const mailer = createMailer(config);
+  warmHeavyJobWorker();
   const app = createApp({ config, sequelize, mailer }, { clientDir: options.clientDir });
   const server: Server = await new Promise((resolve, reject) => {
     const s = app.listen(config.PORT, config.HOST, () => resolve(s));

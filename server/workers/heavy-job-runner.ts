@@ -1,5 +1,6 @@
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort } from 'node:worker_threads';
 import { CalibrationRefused, fitCalibration, type CalibrationObservation, type CalibrationOptions } from '../../shared/calibration';
+import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-compute';
 
 /**
  * The jobs a worker thread can run: pure computations on data the request thread has read,
@@ -7,13 +8,17 @@ import { CalibrationRefused, fitCalibration, type CalibrationObservation, type C
  */
 const JOBS = {
   calibrationFit: (input: { observations: CalibrationObservation[]; options: CalibrationOptions }) => fitCalibration(input.observations, input.options),
+  plan: (input: PlanJob) => computePlan(input),
 };
 export type HeavyJobName = keyof typeof JOBS;
 
-const { job, input } = workerData as { job: HeavyJobName; input: never };
-try {
-  parentPort!.postMessage({ ok: true, value: JOBS[job](input) });
-} catch (error) {
-  const refused = error instanceof CalibrationRefused ? { reason: error.reason, counts: error.counts } : null;
-  parentPort!.postMessage({ ok: false, error: { name: (error as Error).name, message: (error as Error).message, refused } });
-}
+// One job per message; the thread stays warm for the next (server/services/heavy-jobs.ts pools it).
+parentPort!.on('message', ({ job, input }: { job: HeavyJobName; input: never }) => {
+  try {
+    parentPort!.postMessage({ ok: true, value: JOBS[job](input) });
+  } catch (error) {
+    const refused = error instanceof CalibrationRefused ? { reason: error.reason, counts: error.counts } : null;
+    const field = error instanceof PlanInputProblem ? error.field : null;
+    parentPort!.postMessage({ ok: false, error: { name: (error as Error).name, message: (error as Error).message, refused, field } });
+  }
+});
