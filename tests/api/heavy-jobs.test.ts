@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { parse } from 'csv-parse/sync';
 import request from 'supertest';
-import { Calibration, Observation, type Programme } from '../../server/models';
+import { Calibration, Observation, Plan, type Programme } from '../../server/models';
 import { EXPORT_PAGE_ROWS } from '../../server/services/observation-export';
 import { buildUser, type TestUser } from '../support/builders';
-import { buildProgramme } from '../support/team-builders';
+import { buildLibrary, buildProgramme } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
 
 let stack: TestStack;
@@ -70,6 +70,26 @@ describe('calibration fits run in a worker thread', () => {
     const answers = await Promise.all([1, 2].map(() => agent.post(`/api/programmes/${programme.id}/calibrations`).send({ parameters: ['attractionShift'] })));
     expect(answers.map((a) => a.status).sort()).toEqual([201, 429]);
     expect(answers.find((a) => a.status === 429)!.body.error.message).toMatch(/heavy job/);
+  });
+});
+
+describe('planner runs in a worker thread', () => {
+  it('POST /api/plans past HEAVY_JOB_SECONDS is stopped with 503 and stores no plan; within it, the plan is stored', async () => {
+    const lib = await buildLibrary();
+    const programme = await buildProgramme();
+    const formulator = await buildUser({ role: 'formulator' });
+    const body = {
+      programmeId: programme.id, particleId: lib.particle.id, solventId: lib.solvent.id, temperatureC: 25,
+      attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: { min: 0, max: 12 } },
+      phi: { min: 0.05, max: 0.4 }, targetState: 'gel', minMargin: 0.15, candidateCount: 5, experimentCount: 3,
+    };
+    const hurried = await (await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.1' }), formulator)).post('/api/plans').send(body);
+    expect(hurried.status).toBe(503);
+    expect(hurried.body.error.id).toBe('job_timed_out');
+    expect(await Plan.count({ where: { programmeId: programme.id } })).toBe(0);
+    const patient = await (await agentFor(stack.app, formulator)).post('/api/plans').send(body);
+    expect(patient.status).toBe(201);
+    expect(patient.body.plan.outcome.counts.sampled).toBe(10_000);
   });
 });
 
