@@ -97,12 +97,14 @@ export async function calibrationObservations(programmeId: number, transaction: 
     maps.set(recipe.id, map);
   }
   const adhocMap = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' });
-  const observations = await Observation.findAll({
+  // Plain rows: a programme may hold tens of thousands, and model instances cost CPU on the request thread.
+  const observations = (await Observation.findAll({
     where: { programmeId, archivedAt: null },
     attributes: ['id', 'recipeId', 'adhocPhi', 'adhocReducedB2', 'observedState'],
     order: [['id', 'ASC']],
     transaction,
-  });
+    raw: true,
+  })) as unknown as Pick<Observation, 'id' | 'recipeId' | 'adhocPhi' | 'adhocReducedB2' | 'observedState'>[];
   const offered: CalibrationObservation[] = [];
   for (const o of observations) {
     if (o.recipeId === null) {
@@ -121,11 +123,16 @@ function refusal(error: CalibrationRefused) {
   return new HttpError(422, 'calibration_refused', error.message, { reason: error.reason, counts: error.counts });
 }
 
-/** Fits a calibration to the programme's bench and stores it as proposed. */
+/**
+ * Fits a calibration to the programme's bench and stores it as proposed. The route runs without
+ * a transaction: the bench is read, the fit runs in a worker thread holding no database
+ * connection (a long fit would outlast the connection's socket timeout), and the result is
+ * written in a transaction of its own.
+ */
 export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, input: CalibrationFitInput) {
-  const programme = await requireProgramme(programmeId, ctx.transaction, 'param');
+  const programme = await requireProgramme(programmeId, null, 'param');
   if (programme.archivedAt) throw conflict('The programme is archived; restore it before calibrating');
-  const observations = await calibrationObservations(programmeId, ctx.transaction);
+  const observations = await calibrationObservations(programmeId, null);
   const { HEAVY_JOBS_PER_USER, HEAVY_JOB_SECONDS } = ctx.deps.config;
   let result: CalibrationFit;
   try {
@@ -137,6 +144,17 @@ export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, inp
     if (error instanceof HeavyJobFailed && error.refused) throw refusal(new CalibrationRefused(error.refused.reason as CalibrationRefused['reason'], error.message, error.refused.counts as Record<string, number>));
     throw error;
   }
+  return ctx.deps.sequelize.transaction(async (transaction) => {
+    ctx.transaction = transaction;
+    try {
+      return await storeFit(ctx, programmeId, input, result);
+    } finally {
+      ctx.transaction = null;
+    }
+  });
+}
+
+async function storeFit(ctx: Ctx, programmeId: number, input: CalibrationFitInput, result: CalibrationFit) {
   const fit = result.fit;
   const calibration = await Calibration.create(
     {

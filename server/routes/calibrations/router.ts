@@ -25,6 +25,8 @@ export const calibrationRoutes = [
     summary: 'Fit the gel boundary to the programme’s bench observations and keep the fit as a proposal',
     params: programmeIdParamSchema,
     body: calibrationFitSchema,
+    // The fit runs outside any transaction; the service writes its result in one of its own.
+    transactional: false,
     async handler(ctx) {
       return { status: 201, body: { calibration: presentCalibration(await fitProgrammeCalibration(ctx, ctx.params.id, ctx.body)) } };
     },
