@@ -31,12 +31,27 @@ export const STATE_DESCRIPTIONS: Record<ObservedState, string> = {
 };
 
 /**
- * Whether an observed state agrees with a prediction: the same state agrees; a collapsed
- * gel disagrees with every prediction except gel; "unclear" says nothing (null).
+ * Gelwright's one choice for a collapsed sample: it agrees with a prediction of gel. The sample
+ * did form a gel — the state map's call was right — and then compacted under its own weight,
+ * which is a question of shelf life (judged from the ageing records), not of the state map. The
+ * calibration counts collapsed samples on the gel side for the same reason.
+ */
+export const COLLAPSED_AGREES_WITH_GEL = true;
+
+/** Observed states that agree with a prediction of another name: [observed, predicted]. */
+export const AGREEING_OTHER_STATES: ReadonlyArray<readonly [ObservedState, PredictedState]> = COLLAPSED_AGREES_WITH_GEL ? [['collapsed', 'gel']] : [];
+
+/**
+ * Whether an observed state agrees with a prediction — the one definition every screen, export,
+ * filter and fit uses: the same state agrees, and so does each pair of AGREEING_OTHER_STATES
+ * (a collapsed sample of a predicted gel); anything else disagrees; "unclear" or no prediction
+ * says nothing (null). The bench log's SQL filter is built from the same list.
+ * @example observationAgrees('collapsed', 'gel') // true
+ * @example observationAgrees('collapsed', 'fluid') // false
  */
 export function observationAgrees(observed: ObservedState, predicted: PredictedState | null): boolean | null {
   if (observed === 'unclear' || predicted === null) return null;
-  return observed === predicted;
+  return observed === predicted || AGREEING_OTHER_STATES.some(([o, p]) => o === observed && p === predicted);
 }
 
 export const OBSERVATION_METHODS = ['visual', 'rheology', 'microscopy', 'scattering'] as const;

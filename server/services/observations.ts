@@ -1,5 +1,6 @@
 import { Op, QueryTypes, Sequelize, type Transaction, type WhereOptions } from 'sequelize';
 import type { ObservationInput, ObservationListQuery } from '../../shared/schemas/observations';
+import { AGREEING_OTHER_STATES } from '../../shared/states';
 import { badRequest, forbidden, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { programmeWritten } from '../http/write-events';
@@ -38,7 +39,11 @@ export function observationWhere(query: ObservationListQuery): WhereOptions {
     // Compared with the recipe's current prediction, or the ad-hoc one; "unclear" never disagrees.
     // A correlated subquery, not the joined alias: paged queries put the joins outside the WHERE.
     const predicted = 'COALESCE((SELECT r.predicted_state FROM recipes r WHERE r.id = `Observation`.`recipe_id`), `Observation`.`adhoc_predicted_state`)';
-    const disagrees = `(\`Observation\`.\`observed_state\` <> 'unclear' AND ${predicted} IS NOT NULL AND CAST(\`Observation\`.\`observed_state\` AS CHAR) <> CAST(${predicted} AS CHAR))`;
+    // observationAgrees (shared/states.ts) in SQL: the pairs come from the same list, as literals
+    // of the states enum (never user input).
+    const observed = 'CAST(`Observation`.`observed_state` AS CHAR)';
+    const alsoAgree = AGREEING_OTHER_STATES.map(([o, p]) => ` AND NOT (${observed} = '${o}' AND CAST(${predicted} AS CHAR) = '${p}')`).join('');
+    const disagrees = `(\`Observation\`.\`observed_state\` <> 'unclear' AND ${predicted} IS NOT NULL AND ${observed} <> CAST(${predicted} AS CHAR)${alsoAgree})`;
     where[Op.and] = [Sequelize.literal(query.disagreeing === 'true' ? disagrees : `NOT ${disagrees}`)];
   }
   return where;

@@ -1,5 +1,5 @@
 import { classifyPoint, type ClassifierParameters } from '../physics';
-import { PREDICTED_STATES } from '../states';
+import { observationAgrees, PREDICTED_STATES } from '../states';
 import type { AgreementTable, CalibrationPoint } from './types';
 
 const OBSERVED: AgreementTable['observed'] = ['fluid', 'gel', 'collapsed', 'separated', 'crystal', 'glass'];
@@ -28,7 +28,7 @@ export function agreementTable(points: CalibrationPoint[], parameters: Partial<C
     else if (predictedGel) gelSide.falsePositive++;
     else if (p.outcome === 1) gelSide.falseNegative++;
     else gelSide.trueNegative++;
-    if (predicted === (p.observedState === 'collapsed' ? 'gel' : p.observedState)) same++;
+    if (observationAgrees(p.observedState, predicted) === true) same++;
   }
   const n = points.length;
   return {

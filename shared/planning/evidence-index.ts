@@ -1,5 +1,5 @@
 import { quadtree } from 'd3-quadtree';
-import type { GoalState } from '../states';
+import { observationAgrees, type GoalState } from '../states';
 import type { PlacedEvidence } from './place-evidence';
 import type { NearestEvidence } from './types';
 
@@ -17,6 +17,6 @@ export function evidenceIndex(placed: readonly PlacedEvidence[], target: GoalSta
   return (x, u, within) => {
     const found = tree.find(x, u, within);
     if (!found) return null;
-    return { id: found.id, label: found.label, observedState: found.observedState, ageDays: found.ageDays, distance: Math.hypot(found.x - x, found.u - u), agrees: found.observedState === target };
+    return { id: found.id, label: found.label, observedState: found.observedState, ageDays: found.ageDays, distance: Math.hypot(found.x - x, found.u - u), agrees: observationAgrees(found.observedState, target) === true };
   };
 }

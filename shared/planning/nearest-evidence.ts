@@ -1,4 +1,4 @@
-import type { GoalState } from '../states';
+import { observationAgrees, type GoalState } from '../states';
 import type { PlacedEvidence } from './place-evidence';
 import type { NearestEvidence } from './types';
 
@@ -24,5 +24,5 @@ export function nearestEvidence(x: number, u: number, placed: readonly PlacedEvi
     }
   }
   if (!best) return null;
-  return { id: best.id, label: best.label, observedState: best.observedState, ageDays: best.ageDays, distance: Math.sqrt(best2), agrees: best.observedState === target };
+  return { id: best.id, label: best.label, observedState: best.observedState, ageDays: best.ageDays, distance: Math.sqrt(best2), agrees: observationAgrees(best.observedState, target) === true };
 }

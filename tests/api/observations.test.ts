@@ -55,6 +55,18 @@ describe('POST /api/observations', () => {
     expect(stored.body.observation).toEqual(same.body.observation);
   });
 
+  it('counts a collapsed sample of a predicted gel as agreeing, in the answer and in the bench-log filter alike', async () => {
+    const gelRecipe = recipe.derived.predictedState === 'gel' ? recipe : null;
+    expect(gelRecipe, 'the shared test recipe is predicted to gel').not.toBeNull();
+    const collapsed = await scientist.post('/api/observations').send(observation({ observedState: 'collapsed' }));
+    expect(collapsed.status).toBe(201);
+    expect(collapsed.body.observation.agrees).toBe(true);
+    const disagreeing = await scientist.get(`/api/observations?recipe=${recipe.id}&disagreeing=true`);
+    expect(disagreeing.body.items.map((o: { id: number }) => o.id)).not.toContain(collapsed.body.observation.id);
+    const agreeing = await scientist.get(`/api/observations?recipe=${recipe.id}&disagreeing=false`);
+    expect(agreeing.body.items.map((o: { id: number }) => o.id)).toContain(collapsed.body.observation.id);
+  });
+
   it('records an ad-hoc composition with its own prediction', async () => {
     const response = await scientist.post('/api/observations').send({ ...observation(), recipeId: undefined, adhoc: { programmeId: programme.id, phi: 0.2, reducedB2: -6, description: 'leftover batch, no recipe' } });
     expect(response.status).toBe(201);

@@ -1,9 +1,9 @@
 import type { AgreementTable } from '@shared/calibration/types';
-import { STATE_LABELS } from '@shared/states';
+import { observationAgrees, STATE_LABELS, type ObservedState, type PredictedState } from '@shared/states';
 
 /** Predicted (rows) × observed (columns) counts; the cells where prediction and bench agree are shaded. */
 export function AgreementGrid({ table, caption }: { table: AgreementTable; caption: string }) {
-  const agrees = (predicted: string, observed: string) => predicted === observed || (predicted === 'gel' && observed === 'collapsed');
+  const agrees = (predicted: string, observed: string) => observationAgrees(observed as ObservedState, predicted as PredictedState) === true;
   return (
     <div className="overflow-x-auto">
       <table className="w-full border-collapse text-sm">
