@@ -3,7 +3,7 @@ import { requireInRange } from '../validation/require-in-range';
 import { requireStickiness } from '../validation/require-stickiness';
 import { requireVolumeFraction } from '../validation/require-volume-fraction';
 import { DEFAULT_MODE_COUPLING_GRID, modeCouplingGrid, type ModeCouplingGrid } from './mode-coupling-grid';
-import { memoryScratch, modeCouplingMemory } from './mode-coupling-memory';
+import { DECAYED, nonergodicityIteration } from './nonergodicity-step';
 import { modeCouplingVertex, type ModeCouplingVertex } from './mode-coupling-vertex';
 
 /** Result of the non-ergodicity iteration at one state. */
@@ -28,8 +28,6 @@ export interface NonergodicityOptions {
 
 /** Iteration stops: settled when no f_q moves by more than this in one step. */
 const SETTLED = 1e-9;
-/** Ergodic once every f_q fell below this (the transition is discontinuous: f_c ≳ 0.1 at its peak). */
-const DECAYED = 1e-4;
 const MAX_ITERATIONS = 20_000;
 
 /**
@@ -81,27 +79,16 @@ function gridOf(options: NonergodicityOptions): ModeCouplingGrid {
  * Internal (the transition search reuses it).
  */
 export function iterateNonergodicity(vertex: ModeCouplingVertex, settled: number = SETTLED): { arrested: boolean; f: Float64Array; iterations: number; convergenceRate: number } {
-  const n = vertex.grid.points;
-  const f = new Float64Array(n).fill(1);
-  const m = new Float64Array(n);
-  const scratch = memoryScratch(n);
+  const iteration = nonergodicityIteration(vertex);
+  const f = iteration.f;
   let previousChange = NaN;
   let rate = NaN;
-  for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration++) {
-    modeCouplingMemory(vertex, f, m, scratch);
-    let change = 0;
-    let largest = 0;
-    for (let i = 0; i < n; i++) {
-      const next = m[i] / (1 + m[i]);
-      const step = Math.abs(next - f[i]);
-      if (step > change) change = step;
-      if (next > largest) largest = next;
-      f[i] = next;
-    }
-    if (largest < DECAYED) return { arrested: false, f: f.fill(0), iterations: iteration, convergenceRate: NaN };
+  for (let count = 1; count <= MAX_ITERATIONS; count++) {
+    const { change, largest } = iteration.step();
+    if (largest < DECAYED) return { arrested: false, f: f.fill(0), iterations: count, convergenceRate: NaN };
     rate = change / previousChange;
     previousChange = change;
-    if (change < settled) return { arrested: true, f, iterations: iteration, convergenceRate: rate };
+    if (change < settled) return { arrested: true, f, iterations: count, convergenceRate: rate };
   }
   // Not settled within the cap: only states within ~1e-8 of the transition get here; the
   // iterates still sit on the plateau, so the state is counted as arrested.

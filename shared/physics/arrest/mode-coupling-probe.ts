@@ -1,7 +1,7 @@
 import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
 import type { ModeCouplingGrid } from './mode-coupling-grid';
 import { structureFactorUnchecked } from './baxter-sticky-structure-factor';
-import { memoryScratch, modeCouplingMemory } from './mode-coupling-memory';
+import { DECAYED, nonergodicityIteration } from './nonergodicity-step';
 import { modeCouplingVertex } from './mode-coupling-vertex';
 
 /**
@@ -23,7 +23,6 @@ export interface ArrestProbe {
 const RATE_SETTLED = 2e-5;
 /** Arrest is certain once the geometric tail of the remaining steps is this small a part of max f. */
 const TAIL_SHARE = 0.05;
-const DECAYED = 1e-4;
 /**
  * States with S(0) above this (more compressible than an ideal gas: near the critical point or
  * the spinodal) are not probed: there idealised MCT arrests on long-wavelength fluctuations, an
@@ -45,23 +44,12 @@ export function probeArrest(phi: number, tau: number, grid: ModeCouplingGrid, st
   const lambda = tau === Infinity ? 0 : baxterLambdaUnchecked(phi, tau);
   if (lambda === null || structureFactorUnchecked(phi, lambda, 0) > LONG_WAVELENGTH_LIMIT) return null;
   const vertex = modeCouplingVertex(phi, lambda, grid);
-  const n = grid.points;
-  const f = start ? Float64Array.from(start) : new Float64Array(n).fill(1);
-  const m = new Float64Array(n);
-  const scratch = memoryScratch(n);
+  const run = nonergodicityIteration(vertex, start);
+  const f = run.f;
   let previousChange = NaN;
   let previousRate = NaN;
   for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration++) {
-    modeCouplingMemory(vertex, f, m, scratch);
-    let change = 0;
-    let largest = 0;
-    for (let i = 0; i < n; i++) {
-      const next = m[i] / (1 + m[i]);
-      const step = f[i] - next;
-      if (step > change) change = step;
-      if (next > largest) largest = next;
-      f[i] = next;
-    }
+    const { change, largest } = run.step();
     if (largest < DECAYED) return { arrested: false, g: NaN, iterations: iteration, f };
     const rate = change / previousChange;
     if (change === 0) return { arrested: true, g: 1, iterations: iteration, f };
