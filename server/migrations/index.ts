@@ -7,6 +7,7 @@ import * as m0005 from './0005-programme-change-indexes';
 import * as m0006 from './0006-shortlist-item-snapshots';
 import * as m0007 from './0007-user-session-version';
 import * as m0008 from './0008-idempotent-writes';
+import * as m0009 from './0009-observations-export-order';
 
 export interface Migration {
   name: string;
@@ -24,4 +25,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0006-shortlist-item-snapshots', ...m0006 },
   { name: '0007-user-session-version', ...m0007 },
   { name: '0008-idempotent-writes', ...m0008 },
+  { name: '0009-observations-export-order', ...m0009 },
 ];
