@@ -51,7 +51,7 @@ export function buildAxis(model: MapModel, yMax: number | undefined): MapAxis {
   }
   return {
     label: 'φ_p^R',
-    quantity: `reservoir polymer volume fraction (size ratio q = ${model.q})`,
+    quantity: `reservoir polymer volume fraction (size ratio q = ${Number(model.q.toPrecision(3))})`,
     unit: '',
     domain: [0, strongest],
     inverted: false,

@@ -168,7 +168,7 @@ function requireInteger(argument: string, value: number, low: number, high: numb
 function modelNames(model: MapModel): { model: string; binodal: string; spinodal: string; critical: string } {
   if (model.kind === 'depletion' && model.q <= SHORT_RANGE_LIMIT) {
     return {
-      model: `Colloid + ideal polymer, short range (q = ${model.q}): free-volume crystal lines, fluid–fluid lines by B2*`,
+      model: `Colloid + ideal polymer, short range (q = ${Number(model.q.toPrecision(3))}): free-volume crystal lines, fluid–fluid lines by B2*`,
       binodal: 'Fluid–fluid binodal (mean field through B2*, approximate)',
       spinodal: 'Spinodal (mean field through B2*)',
       critical: 'Critical point (mean field through B2*)',
@@ -176,7 +176,7 @@ function modelNames(model: MapModel): { model: string; binodal: string; spinodal
   }
   if (model.kind === 'depletion') {
     return {
-      model: `Colloid + ideal polymer, free-volume theory (q = ${model.q})`,
+      model: `Colloid + ideal polymer, free-volume theory (q = ${Number(model.q.toPrecision(3))})`,
       binodal: 'Gas–liquid binodal (free-volume theory)',
       spinodal: 'Spinodal (free-volume theory)',
       critical: 'Critical point (free-volume theory)',
@@ -338,7 +338,7 @@ function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, par
     }
   } else {
     const endpoint = freeVolumeCriticalEndpoint();
-    notes.push(`Free-volume theory (Lekkerkerker et al. 1992) for colloids with ideal polymer at size ratio q = ${model.q}; attraction is the Asakura–Oosawa depletion potential.`);
+    notes.push(`Free-volume theory (Lekkerkerker et al. 1992) for colloids with ideal polymer at size ratio q = ${Number(model.q.toPrecision(3))}; attraction is the Asakura–Oosawa depletion potential.`);
     if (model.q <= SHORT_RANGE_LIMIT) {
       notes.push(`Short-range depletion (q ≤ ${SHORT_RANGE_LIMIT}): the fluid–fluid lines (binodal, spinodal, critical point) are the mean-field lines at each level's B2* (extended law of corresponding states, as Lu et al. 2008 placed their depletion gels); free-volume theory gives the fluid–crystal lines. Its own gas–liquid dome lies at φ ≳ 0.6 for such small q, where it says nothing about dilute gels.`);
     } else {

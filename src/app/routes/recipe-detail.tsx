@@ -19,6 +19,7 @@ import { RecipeComposition } from '@/features/recipes/components/recipe-composit
 import { useRecipeMap } from '@/features/recipes/hooks/use-recipe-map';
 import { useMapPoints } from '@/features/map/api/get-map-points';
 import { nearbyEvidence } from '@/features/recipes/components/nearby-evidence';
+import { BenchSurvival } from '@/features/recipes/components/bench-survival';
 import { ShelfLifePanel } from '@/features/recipes/components/shelf-life-panel';
 
 export function RecipeDetailRoute() {
@@ -69,6 +70,9 @@ export function RecipeDetailRoute() {
             <DerivedPanel derived={r.derived} />
           </Card>
           <Card title="Shelf life">
+            <div className="mb-4">
+              <BenchSurvival checks={observations.data ?? null} />
+            </div>
             <ShelfLifePanel derived={r.derived} evidence={points.data ? nearbyEvidence(r.id, r.derived, points.data) : null} />
           </Card>
           <Card title="Bench outcomes by age">

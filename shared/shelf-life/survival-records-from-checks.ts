@@ -1,0 +1,44 @@
+import type { ObservedState } from '../states';
+import type { SurvivalRecord } from './types';
+
+/** One bench check of a sample: when the sample was mixed, its age at the check, what was seen. */
+export interface SampleCheck {
+  /** The mixing date (ISO); checks with the same date are the same sample. */
+  mixedAt: string;
+  ageDays: number;
+  observedState: ObservedState;
+}
+
+/**
+ * The survival records of a recipe's samples, from its bench checks. A sample is one mixing date
+ * (the bench log records each check of a sample against the date it was mixed). A sample counts
+ * once it was seen as a gel or as collapsed — shelf life is the life of a gel; samples never seen
+ * as either (they did not gel) are left out. Its record is the first age at which it was seen
+ * collapsed (an event), or else the last age at which it was checked (right-censored: it stood
+ * at least that long). An "unclear" check still proves the sample was watched up to that age.
+ * Common practice of survival analysis (Klein & Moeschberger, Survival Analysis, 2nd ed. (2003),
+ * §1.2: right censoring at the last follow-up).
+ * @example survivalRecordsFromChecks([
+ *   { mixedAt: '2026-01-05', ageDays: 7, observedState: 'gel' },
+ *   { mixedAt: '2026-01-05', ageDays: 21, observedState: 'collapsed' },
+ *   { mixedAt: '2026-02-01', ageDays: 14, observedState: 'gel' },
+ * ]) // [{ timeDays: 21, collapsed: true }, { timeDays: 14, collapsed: false }]
+ */
+export function survivalRecordsFromChecks(checks: readonly SampleCheck[]): SurvivalRecord[] {
+  const samples = new Map<string, { gelled: boolean; firstCollapse: number; lastCheck: number }>();
+  for (const check of checks) {
+    if (!(check.ageDays >= 0) || !Number.isFinite(check.ageDays)) continue;
+    const key = check.mixedAt.slice(0, 10);
+    const sample = samples.get(key) ?? { gelled: false, firstCollapse: Infinity, lastCheck: -Infinity };
+    if (check.observedState === 'gel' || check.observedState === 'collapsed') sample.gelled = true;
+    if (check.observedState === 'collapsed') sample.firstCollapse = Math.min(sample.firstCollapse, check.ageDays);
+    sample.lastCheck = Math.max(sample.lastCheck, check.ageDays);
+    samples.set(key, sample);
+  }
+  const records: SurvivalRecord[] = [];
+  for (const sample of samples.values()) {
+    if (!sample.gelled) continue;
+    records.push(sample.firstCollapse < Infinity ? { timeDays: sample.firstCollapse, collapsed: true } : { timeDays: sample.lastCheck, collapsed: false });
+  }
+  return records;
+}

@@ -1,0 +1,52 @@
+import { beforeAll, describe, expect, it } from 'vitest';
+import { seriousAccessibilityViolations } from '../support/axe';
+import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
+import { withBrowserStack } from '../support/browser-suite';
+import { buildUser, signedInAgent, type TestUser } from '../support/builders';
+import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
+
+// Expected figures by hand from the product-limit rule (Kaplan & Meier 1958): three samples,
+// collapsed at 21 and 35 days, one standing at 28 → Ŝ = 2/3 after day 21, 0 after day 35, so
+// half have collapsed by day 35 (derived).
+
+const suite = withBrowserStack();
+let formulator: TestUser;
+let code: string;
+
+beforeAll(async () => {
+  const lib = await buildLibrary();
+  const programme = await buildProgramme({ name: 'Shelf-watched primers', goalState: 'gel', attractionSource: 'depletion' });
+  formulator = await buildUser({ role: 'formulator' });
+  const created = await (await signedInAgent(suite.stack.app, formulator)).post('/api/recipes').send(recipeInput(programme, lib, { name: 'Weak primer gel' }));
+  expect(created.status).toBe(201);
+  code = created.body.recipe.code;
+  const scientist = await signedInAgent(suite.stack.app, await buildUser({ role: 'scientist' }));
+  const checks: Array<[string, number, string]> = [
+    ['2026-01-05', 7, 'gel'], ['2026-01-05', 21, 'collapsed'],
+    ['2026-01-12', 7, 'gel'], ['2026-01-12', 28, 'gel'],
+    ['2026-01-19', 14, 'gel'], ['2026-01-19', 35, 'collapsed'],
+  ];
+  for (const [mixedAt, ageDays, observedState] of checks) {
+    const response = await scientist.post('/api/observations').send({ recipeId: created.body.recipe.id, mixedAt, ageDays, observedState, method: 'visual' });
+    expect(response.status).toBe(201);
+  }
+});
+
+describe('shelf life on the recipe page', () => {
+  it('shows how long the recipe\'s gels lasted on the bench: the survival curve with its band and the median in words', async () => {
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/recipes/${code}`);
+    const panel = page.getByTestId('bench-survival');
+    await panel.waitFor();
+    expect(await panel.textContent()).toContain('Half collapsed by 35 days');
+    expect(await panel.textContent()).toContain('2 collapses in 3 samples');
+    await page.getByRole('img', { name: /still standing against age/ }).waitFor();
+    await page.getByText("Where this map's lines come from").click();
+    expect(await page.getByTestId('line-sources').textContent()).toContain('mode-coupling');
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
+    await screenshot(page, 'recipe-shelf-life');
+    expect(unexpected()).toEqual([]);
+    await context.close();
+  });
+});
