@@ -1,4 +1,5 @@
 import { attractionToReducedB2, type StateMap } from '../physics';
+import { DEFAULT_SQUARE_WELL_RANGE } from '../physics/map/resolve-map-model';
 
 /**
  * B2* at the top of a map's theory tables (its strongest attraction): above it the domes keep
@@ -13,6 +14,6 @@ export function strongestReducedB2(map: StateMap): number {
   const model = map.model;
   const top = map.y.strongest;
   if (model.kind === 'generic' && model.axis === 'inverseTau') return 1 - top / 4;
-  if (model.kind === 'generic' && model.axis === 'squareWellDepth') return attractionToReducedB2({ kind: 'squareWell', depth: top, lambda: model.lambda ?? 1.5 });
+  if (model.kind === 'generic' && model.axis === 'squareWellDepth') return attractionToReducedB2({ kind: 'squareWell', depth: top, lambda: model.lambda ?? DEFAULT_SQUARE_WELL_RANGE });
   return top;
 }

@@ -1,5 +1,6 @@
 import { asakuraOosawaContactEnergy } from './asakura-oosawa-contact-energy';
 import { asakuraOosawaReducedB2 } from './asakura-oosawa-reduced-b2';
+import { stickinessFromReducedB2 } from './stickiness-from-reduced-b2';
 
 export interface DepletionAttraction {
   /** Depth of the attraction at contact, U/kT = φ_p^R(1 + 3/(2q)) (positive). */
@@ -27,5 +28,5 @@ export interface DepletionAttraction {
 export function asakuraOosawaAttraction(q: number, polymerReservoir: number): DepletionAttraction {
   const contactEnergy = -asakuraOosawaContactEnergy(q, polymerReservoir);
   const b2 = asakuraOosawaReducedB2(q, polymerReservoir);
-  return { contactEnergy, range: q, b2, tau: b2 < 1 ? 1 / (4 * (1 - b2)) : null };
+  return { contactEnergy, range: q, b2, tau: b2 < 1 ? stickinessFromReducedB2(b2) : null };
 }

@@ -1,3 +1,5 @@
+import { reducedB2FromStickiness } from '../attraction/reduced-b2-from-stickiness';
+import { stickinessFromReducedB2 } from '../attraction/stickiness-from-reduced-b2';
 import { asakuraOosawaReducedB2 } from '../attraction/asakura-oosawa-reduced-b2';
 import { freeVolumeCriticalEndpoint } from '../depletion/free-volume-critical-endpoint';
 import { freeVolumeCriticalPoint } from '../depletion/free-volume-critical-point';
@@ -266,7 +268,7 @@ function buildMarkers(traced: TheoryCurves, drawn: MapFrame, names: { critical: 
   if (traced.binodal) {
     markers.push({ id: 'critical-point', label: names.critical, x: traced.binodal.left.phi[0], y: drawn.drawnYFromTheoryU(traced.binodal.bottom) });
   }
-  const simulationB2 = 1 - 1 / (4 * SIMULATION_CRITICAL_POINT.tau);
+  const simulationB2 = reducedB2FromStickiness(SIMULATION_CRITICAL_POINT.tau);
   const simulationY = drawn.yFromB2(simulationB2 + drawn.shift);
   markers.push({
     id: 'simulation-critical-point',
@@ -334,7 +336,7 @@ function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, par
     notes.push('Fluid–crystal lines: the same mean-field attraction applied to the Carnahan–Starling fluid and the cell-model crystal (approximate for short-range attraction, which widens coexistence more).');
     if (model.theory === 'baxterPY' && traced.binodal && traced.binodalTop !== null && traced.binodalTop < 1) {
       const b2 = theory.b2FromY(theory.yFromU(traced.binodalTop));
-      notes.push(`The Percus–Yevick binodal has no solution beyond B2* ≈ ${b2.toFixed(2)} (τ ≈ ${(1 / (4 * (1 - b2))).toFixed(4)}); it is drawn up to there and the classifier keeps its last width above.`);
+      notes.push(`The Percus–Yevick binodal has no solution beyond B2* ≈ ${b2.toFixed(2)} (τ ≈ ${stickinessFromReducedB2(b2).toFixed(4)}); it is drawn up to there and the classifier keeps its last width above.`);
     }
   } else {
     const endpoint = freeVolumeCriticalEndpoint();

@@ -1,4 +1,5 @@
 import type { MapModel } from './types';
+import { DEFAULT_SQUARE_WELL_RANGE } from './resolve-map-model';
 
 type GenericModel = Extract<MapModel, { kind: 'generic' }>;
 
@@ -15,7 +16,7 @@ export function genericYFromB2(model: GenericModel, b2: number): number {
     case 'inverseTau':
       return 4 * (1 - b2);
     case 'squareWellDepth': {
-      const shell = (model.lambda ?? 1.5) ** 3 - 1;
+      const shell = (model.lambda ?? DEFAULT_SQUARE_WELL_RANGE) ** 3 - 1;
       const argument = (1 - b2) / shell;
       // Below e^U − 1 = −1 no well reproduces B2*: clamp far below the map.
       return argument > -1 ? Math.log1p(argument) : -50;
@@ -31,6 +32,6 @@ export function genericB2FromY(model: GenericModel, y: number): number {
     case 'inverseTau':
       return 1 - y / 4;
     case 'squareWellDepth':
-      return 1 - ((model.lambda ?? 1.5) ** 3 - 1) * Math.expm1(y);
+      return 1 - ((model.lambda ?? DEFAULT_SQUARE_WELL_RANGE) ** 3 - 1) * Math.expm1(y);
   }
 }

@@ -14,6 +14,8 @@ import { brentRoot } from '../numerics/brent-root';
 import type { PhaseBranch } from '../numerics/two-phase-coexistence';
 import type { MapFrame } from './map-frame';
 import type { LevelPhysics } from './theory-curves';
+import { stickinessFromReducedB2 } from '../attraction/stickiness-from-reduced-b2';
+import { reducedB2FromStickiness } from '../attraction/reduced-b2-from-stickiness';
 
 /**
  * Level physics of a generic map (theory frame): mean-field CS + B2* fluid and crystal for the
@@ -60,11 +62,11 @@ export function genericLevelPhysics(theory: 'meanField' | 'baxterPY', frame: Map
   // B2* ≥ 1 (possible under a negative attraction shift) has no adhesive-sphere equivalent.
   const tauAt = (u: number) => {
     const b2 = b2At(u);
-    return b2 < 1 ? 1 / (4 * (1 - b2)) : Infinity;
+    return b2 < 1 ? stickinessFromReducedB2(b2) : Infinity;
   };
   const band = memoizeLast((u: number) => baxterBandUnchecked(tauAt(u)));
   return {
-    critical: { phi: baxter.phi, u: frame.uFromY(frame.yFromB2(1 - 1 / (4 * baxter.tau))) },
+    critical: { phi: baxter.phi, u: frame.uFromY(frame.yFromB2(reducedB2FromStickiness(baxter.tau))) },
     fluid,
     solid,
     binodalBranches: memoizeLast((u: number): [PhaseBranch, PhaseBranch] | null => {

@@ -9,6 +9,7 @@ import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { attractionToMapY } from '../map/attraction-to-map-y';
 import { FREE_VOLUME_MAX_POLYMER } from '../depletion/free-volume-limits';
+import { DEFAULT_SQUARE_WELL_RANGE } from '../map/resolve-map-model';
 import { buildStateMap } from '../map/build-state-map';
 import { SHORT_RANGE_LIMIT } from '../map/glass-line-table';
 import { classifyPoint } from '../map/classify-point';
@@ -69,7 +70,7 @@ export function deriveRecipeParameters(input: RecipeInput, options: { map?: Stat
     warnings.push('Percus–Yevick has no real root at this φ and τ (inside its no-solution band): reported as no solution; the map keeps the nearest computed boundaries.');
   }
 
-  const sameModel = options.map && JSON.stringify(options.map.model) === JSON.stringify({ ...attraction.mapModel, ...(attraction.mapModel.kind === 'generic' ? { lambda: attraction.mapModel.lambda ?? 1.5 } : {}) });
+  const sameModel = options.map && JSON.stringify(options.map.model) === JSON.stringify({ ...attraction.mapModel, ...(attraction.mapModel.kind === 'generic' ? { lambda: attraction.mapModel.lambda ?? DEFAULT_SQUARE_WELL_RANGE } : {}) });
   let map = sameModel ? options.map! : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
   if (map.crystalSuppressed) warnings.push(`Polydispersity ${polydispersity} % above ${map.parameters.polydispersityCrystalThreshold} %: crystallisation taken as suppressed.`);
   const mapY = attractionToMapY(map, attraction.attraction);

@@ -3,6 +3,7 @@ import { buildStateMap } from '@shared/physics/map/build-state-map';
 import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
 import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
+import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
 import type { MapPoints } from '@shared/views/team-data';
 import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
 import type { MapView } from '../geometry/map-view';
@@ -62,7 +63,7 @@ export function axisTop(model: MapModel, strongest: MapRequest['strongest']): nu
   const target = Math.max(STRONGEST_TOP_B2, b2 * 1.1);
   if (model.axis === 'b2') return target;
   if (model.axis === 'inverseTau') return 4 * (1 - target);
-  return squareWellDepthFromReducedB2(target, model.lambda ?? 1.5);
+  return squareWellDepthFromReducedB2(target, model.lambda ?? DEFAULT_SQUARE_WELL_RANGE);
 }
 
 /**
