@@ -21,9 +21,10 @@ let manager: TestUser;
 let scientist: TestUser;
 const recipeIds: number[] = [];
 
+/** Invented bench outcomes below the attractive-glass line (φ_g ≈ 0.40), on both sides of the gel boundary. */
 async function recordBench(agent: Awaited<ReturnType<typeof signedInAgent>>, target: Programme, count: number, seed: number) {
   const map = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' });
-  for (const o of syntheticObservations({ map, count, seed, truth: { attractionShift: 0.8 }, noiseScale: 0.2, phi: [0.04, 0.45], b2: [-5, 0] })) {
+  for (const o of syntheticObservations({ map, count, seed, truth: { attractionShift: 0.8 }, noiseScale: 0.2, phi: [0.04, 0.38], b2: [-4, 1] })) {
     const response = await agent.post('/api/observations').send({ adhoc: { programmeId: target.id, phi: o.phi, reducedB2: o.reducedB2 }, mixedAt: '2026-03-02', ageDays: 2, observedState: o.observedState, method: 'visual' });
     expect(response.status).toBe(201);
   }
