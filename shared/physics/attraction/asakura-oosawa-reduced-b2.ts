@@ -21,5 +21,6 @@ export function asakuraOosawaReducedB2(q: number, polymerReservoir: number): num
   requirePositive('q', q, 'a size ratio R_g/a');
   requireInRange('polymerReservoir', polymerReservoir, 0, Infinity, { what: 'a reservoir polymer fraction', lowEnd: 'closed' });
   if (polymerReservoir === 0) return 1;
-  return reducedB2FromPotential((x) => asakuraOosawaEnergyUnchecked(x, q, polymerReservoir), 1 + q);
+  // The overlap potential is smooth on the whole range [1, 1 + q]: no scan for well edges needed.
+  return reducedB2FromPotential((x) => asakuraOosawaEnergyUnchecked(x, q, polymerReservoir), 1 + q, { contactScan: false });
 }

@@ -8,6 +8,12 @@ export interface ReducedB2Options {
   breakpoints?: number[];
   /** Relative tolerance of the adaptive quadrature (default 1e-11). */
   relativeTolerance?: number;
+  /**
+   * Scan towards contact for a narrow well's edges (default true). A caller whose potential is
+   * smooth over the whole range (Asakura–Oosawa) turns it off: the scan then only adds cuts
+   * where a steep smooth well changes fast, which costs time and gains no accuracy.
+   */
+  contactScan?: boolean;
 }
 
 /**
@@ -43,7 +49,8 @@ export function reducedB2FromPotential(betaU: (x: number) => number, xMax: numbe
     return Math.expm1(-energy) * x * x;
   };
   const given = (options.breakpoints ?? []).filter((x) => x > 1 && x < xMax);
-  const cuts = [...new Set([1, ...given, ...contactScanCuts(mayerTimesShell, 1, Math.min(xMax, ...given.length ? given : [xMax])), xMax])].sort((a, b) => a - b);
+  const scanned = options.contactScan === false ? [] : contactScanCuts(mayerTimesShell, 1, Math.min(xMax, ...given.length ? given : [xMax]));
+  const cuts = [...new Set([1, ...given, ...scanned, xMax])].sort((a, b) => a - b);
   let integral = 0;
   for (let i = 0; i + 1 < cuts.length; i++) {
     integral += adaptiveGaussKronrod(mayerTimesShell, cuts[i], cuts[i + 1], {

@@ -120,7 +120,7 @@ export function buildStateMap(model: MapModel, options: StateMapOptions = {}): S
     : resolved.q <= SHORT_RANGE_LIMIT ? shortRangeDepletionLevelPhysics(resolved.q, theory) : depletionLevelPhysics(resolved.q, theory);
   const traced = traceTheoryCurves(physics, levelsU);
 
-  const glass = glassLineTable(resolved, theory, parameters, options.glassLine ?? 'rescaled');
+  const glass = glassLineTable(resolved, theory, parameters, options.glassLine ?? 'rescaled', Math.max(1, span.end));
   const partial = { binodal: traced.binodal, spinodal: traced.spinodal, freezing: traced.freezing, melting: traced.melting, glass: glass.curve, attractiveGlassFrom: glass.attractiveFrom };
   const names = modelNames(resolved);
   const curves = buildDrawnCurves(partial, theory, drawn, parameters, names, glass.source);
