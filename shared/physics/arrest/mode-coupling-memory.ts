@@ -1,12 +1,14 @@
 import type { ModeCouplingVertex } from './mode-coupling-vertex';
 
-/** Reusable work space of the memory functional: nine prefix sums over p, interleaved per index. */
+/** Reusable work space of the memory functional: nine prefix sums over p, interleaved per index, and the k weights. */
 export interface MemoryScratch {
   readonly sums: Float64Array;
+  readonly weights: Float64Array;
+  readonly squares: Float64Array;
 }
 
 export function memoryScratch(points: number): MemoryScratch {
-  return { sums: new Float64Array(9 * (points + 1)) };
+  return { sums: new Float64Array(9 * (points + 1)), weights: new Float64Array(points), squares: new Float64Array(points) };
 }
 
 /**
@@ -31,8 +33,12 @@ export function modeCouplingMemory(vertex: ModeCouplingVertex, f: Float64Array, 
   const { grid, structure, direct, prefactor } = vertex;
   const n = grid.points;
   const k = grid.k;
-  const sums = scratch.sums;
+  const { sums, weights, squares } = scratch;
   for (let t = 0; t < 9; t++) sums[t] = 0;
+  for (let j = 0; j < n; j++) {
+    weights[j] = k[j] * structure[j] * f[j];
+    squares[j] = k[j] * k[j];
+  }
   for (let l = 0; l < n; l++) {
     const p = k[l];
     const p2 = p * p;
@@ -57,10 +63,10 @@ export function modeCouplingMemory(vertex: ModeCouplingVertex, f: Float64Array, 
     const q2 = k[i] * k[i];
     let total = 0;
     for (let j = 0; j < n; j++) {
-      const weight = k[j] * structure[j] * f[j];
+      const weight = weights[j];
       const lo = 9 * (i > j ? i - j : j - i);
       const hi = 9 * ((i + j < n - 1 ? i + j : n - 1) + 1);
-      const k2 = k[j] * k[j];
+      const k2 = squares[j];
       const u = q2 + k2;
       const v = q2 - k2;
       const ck = direct[j];
