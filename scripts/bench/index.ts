@@ -124,6 +124,7 @@ Machine: ${machine}. The machine is shared: figures vary from run to run; each r
 | \`POST /api/observations\` p99, 20 connections | under 150 ms | ${figures[2].p99} ms | ${met(figures[2].p99 < 150)} |
 | map redraw on pan, 10,000 points (pan event to the frame that shows it, median) | under 100 ms | ${pan.redrawMedian.toFixed(1)} ms (p90 ${pan.redrawP90.toFixed(1)} ms; canvas paint alone ${pan.paintMedian.toFixed(1)} ms; harness step incl. protocol and two frames ${pan.stepMedian.toFixed(1)} ms) | ${met(pan.redrawMedian < 100)} |
 | physics: full generic map / depletion map / 100,000 classifications | 20 / 100 / 100 ms | see below (each line says) | see below |
+| physics: mode-coupling glass line for a map (40 levels, cold) / mean-field map / free-volume map q = 0.5 (glass line cached) | 300 / 5 / 10 ms | see below (each line says) | see below |
 | planning 10,000 candidate compositions | under 200 ms | see below (each line says) | see below |
 | \`GET /api/health\` p99 while a calibration fit on ${heavy.observations.toLocaleString('en')} observations and five full bench-log exports run (5 connections) | under 100 ms | ${heavy.health.p99} ms (p50 ${heavy.health.p50} ms; fit answered ${heavy.fit.status} after ${heavy.fit.seconds.toFixed(1)} s; exports ${heavy.exports.map((e) => `${e.status}, ${(e.bytes / 2 ** 20).toFixed(1)} MB in ${e.seconds.toFixed(1)} s`).join('; ')}) | ${met(heavy.health.p99 < 100)} |
 
