@@ -105,6 +105,8 @@ async function main() {
   const physics = runScript('scripts/bench/physics.ts');
   console.log('\n— planner —');
   const planner = runScript('scripts/bench/planner.ts');
+  console.log('\n— shelf life —');
+  const shelfLife = runScript('scripts/bench/shelf-life.ts');
   console.log('\n— client —');
   buildClientIfStale(root);
   const bundle = initialJavaScript(join(root, 'dist'));
@@ -153,6 +155,12 @@ ${physics}
 
 \`\`\`
 ${planner}
+\`\`\`
+
+## Shelf life (\`scripts/bench/shelf-life.ts\`)
+
+\`\`\`
+${shelfLife}
 \`\`\`
 
 ## Initial JavaScript

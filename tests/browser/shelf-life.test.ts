@@ -21,13 +21,14 @@ beforeAll(async () => {
   expect(created.status).toBe(201);
   code = created.body.recipe.code;
   const scientist = await signedInAgent(suite.stack.app, await buildUser({ role: 'scientist' }));
-  const checks: Array<[string, number, string]> = [
-    ['2026-01-05', 7, 'gel'], ['2026-01-05', 21, 'collapsed'],
-    ['2026-01-12', 7, 'gel'], ['2026-01-12', 28, 'gel'],
-    ['2026-01-19', 14, 'gel'], ['2026-01-19', 35, 'collapsed'],
+  // G′ of the gel checks rises with age: 100, 110, 130, 150 Pa at 7, 7, 14, 28 days.
+  const checks: Array<[string, number, string, number | null]> = [
+    ['2026-01-05', 7, 'gel', 100], ['2026-01-05', 21, 'collapsed', null],
+    ['2026-01-12', 7, 'gel', 110], ['2026-01-12', 28, 'gel', 150],
+    ['2026-01-19', 14, 'gel', 130], ['2026-01-19', 35, 'collapsed', null],
   ];
-  for (const [mixedAt, ageDays, observedState] of checks) {
-    const response = await scientist.post('/api/observations').send({ recipeId: created.body.recipe.id, mixedAt, ageDays, observedState, method: 'visual' });
+  for (const [mixedAt, ageDays, observedState, storageModulusPa] of checks) {
+    const response = await scientist.post('/api/observations').send({ recipeId: created.body.recipe.id, mixedAt, ageDays, observedState, method: 'rheology', ...(storageModulusPa === null ? {} : { storageModulusPa }) });
     expect(response.status).toBe(201);
   }
 });
@@ -42,6 +43,7 @@ describe('shelf life on the recipe page', () => {
     expect(await panel.textContent()).toContain('Half collapsed by 35 days');
     expect(await panel.textContent()).toContain('2 collapses in 3 samples');
     await page.getByRole('img', { name: /still standing against age/ }).waitFor();
+    expect(await page.getByTestId('stiffening').textContent()).toMatch(/G′ rises by [\d.]+ Pa per tenfold age .*it stiffens as it ages/);
     await page.getByText("Where this map's lines come from").click();
     expect(await page.getByTestId('line-sources').textContent()).toContain('mode-coupling');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
