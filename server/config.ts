@@ -42,7 +42,7 @@ const configSchema = z.object({
   UPLOAD_MAX_REQUEST_BYTES: z.coerce.number().int().min(1024).default(25 * 1024 * 1024),
   LOG_REQUESTS: flag.default(false),
   /** A fit or plan running longer than this in its worker thread is stopped (503). */
-  HEAVY_JOB_SECONDS: z.coerce.number().min(0.1).max(3600).default(60),
+  HEAVY_JOB_SECONDS: z.coerce.number().min(0.001).max(3600).default(60),
   /** Fits, plans and exports one user may have running at once (429 beyond). */
   HEAVY_JOBS_PER_USER: z.coerce.number().int().min(1).max(50).default(2),
 });

@@ -55,7 +55,7 @@ describe('calibration fits run in a worker thread', () => {
   it('stops a fit that runs past HEAVY_JOB_SECONDS with 503 and stores nothing', async () => {
     const programme = await buildProgramme();
     await benchOf(programme, 400);
-    const agent = await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.1' }), scientist);
+    const agent = await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.001' }), scientist);
     const answer = await agent.post(`/api/programmes/${programme.id}/calibrations`).send({ parameters: ['attractionShift'] });
     expect(answer.status).toBe(503);
     expect(answer.body.error.id).toBe('job_timed_out');
@@ -83,7 +83,7 @@ describe('planner runs in a worker thread', () => {
       attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: { min: 0, max: 12 } },
       phi: { min: 0.05, max: 0.4 }, targetState: 'gel', minMargin: 0.15, candidateCount: 5, experimentCount: 3,
     };
-    const hurried = await (await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.1' }), formulator)).post('/api/plans').send(body);
+    const hurried = await (await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.001' }), formulator)).post('/api/plans').send(body);
     expect(hurried.status).toBe(503);
     expect(hurried.body.error.id).toBe('job_timed_out');
     expect(await Plan.count({ where: { programmeId: programme.id } })).toBe(0);
