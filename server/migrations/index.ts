@@ -8,6 +8,7 @@ import * as m0006 from './0006-shortlist-item-snapshots';
 import * as m0007 from './0007-user-session-version';
 import * as m0008 from './0008-idempotent-writes';
 import * as m0009 from './0009-observations-export-order';
+import * as m0010 from './0010-check-schedules';
 
 export interface Migration {
   name: string;
@@ -26,4 +27,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0007-user-session-version', ...m0007 },
   { name: '0008-idempotent-writes', ...m0008 },
   { name: '0009-observations-export-order', ...m0009 },
+  { name: '0010-check-schedules', ...m0010 },
 ];

@@ -14,11 +14,12 @@ import { Calibration } from './calibration';
 import { Plan } from './plan';
 import { PlanRecipe } from './plan-recipe';
 import { IdempotentRequest } from './idempotent-request';
+import { CheckSchedule } from './check-schedule';
 import { programmeWritten } from '../http/write-events';
 
-export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest };
+export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest, CheckSchedule };
 
-const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest];
+const ALL = [User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest, CheckSchedule];
 
 /** Binds every model to the process's Sequelize instance and declares the associations. */
 export function initModels(sequelize: Sequelize) {

@@ -15,6 +15,7 @@ import { shortlistRoutes } from './shortlists/router';
 import { mapPointRoutes } from './map-points/router';
 import { calibrationRoutes } from './calibrations/router';
 import { planRoutes } from './plans/router';
+import { checkScheduleRoutes } from './check-schedules/router';
 
 /**
  * Every API route of the installation. The role-matrix test walks this list, so a route
@@ -38,4 +39,5 @@ export const ALL_ROUTES: RouteSpec[] = [
   ...mapPointRoutes,
   ...calibrationRoutes,
   ...planRoutes,
+  ...checkScheduleRoutes,
 ];

@@ -37,6 +37,7 @@ const ALLOW: Record<string, Expectation> = {
   'GET /api/map-points': EVERY_ROLE,
   ...calibrations(),
   ...plans(),
+  ...checkSchedules(),
 };
 
 function programmes(): Record<string, Expectation> {
@@ -124,6 +125,15 @@ function plans(): Record<string, Expectation> {
     'POST /api/plans': ['admin', 'formulator'],
     'POST /api/plans/:id/recipes': ['admin', 'formulator'],
     'POST /api/plans/:id/next-experiments/recipes': ['admin', 'formulator'],
+  };
+}
+
+/** Whoever records bench outcomes sets when samples are checked; everyone sees what is due (issue: shelf life). */
+function checkSchedules(): Record<string, Expectation> {
+  return {
+    'GET /api/recipes/:id/check-schedule': EVERY_ROLE,
+    'PUT /api/recipes/:id/check-schedule': ['admin', 'scientist'],
+    'GET /api/due-checks': EVERY_ROLE,
   };
 }
 
