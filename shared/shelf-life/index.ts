@@ -15,3 +15,35 @@ export { hazardReading } from './hazard-reading';
 export { stiffeningWithAge, MIN_STIFFENING_AGES, type ModulusAtAge, type StiffeningFit } from './stiffening-with-age';
 export { studentTQuantile } from './student-t-quantile';
 export { Z_95 } from '../statistics/z-95';
+export { breslowBaselineHazard, type BaselineHazard } from './breslow-baseline-hazard';
+export { predictedSurvival, predictedMedianDays, predictedSurvivalAt, type PredictedSurvival } from './predicted-survival';
+export {
+  fitShelfLifeModel,
+  modelMedianDays,
+  modelSurvivalAt,
+  valuesFor,
+  describePrediction,
+  COLLAPSE_PHYSICS_CONTEXT,
+  SHELF_LIFE_COVARIATES,
+  SAMPLE_HEIGHT_OMITTED,
+  type ShelfLifeCovariateKey,
+  type ShelfLifeCovariates,
+  type ShelfLifeModel,
+  type ShelfLifeModelFitted,
+  type ShelfLifeModelRefused,
+  type ShelfLifeModelRecord,
+  type OmittedCovariate,
+} from './shelf-life-model';
+export {
+  programmeShelfLife,
+  REGION_LABELS,
+  SHELF_LIFE_RULES,
+  type ProgrammeShelfLife,
+  type RecipeShelfLife,
+  type GroupShelfLife,
+  type RegionShelfLife,
+  type ShelfLifeRecipeInput,
+  type ShelfLifeSampleInput,
+  type ShelfLifeRegion,
+  type SurvivalSummary,
+} from './programme-shelf-life';
