@@ -15,6 +15,7 @@ import { shortlistRoutes } from './shortlists/router';
 import { mapPointRoutes } from './map-points/router';
 import { calibrationRoutes } from './calibrations/router';
 import { planRoutes } from './plans/router';
+import { shelfLifeRoutes } from './shelf-life/router';
 import { checkScheduleRoutes } from './check-schedules/router';
 
 /**
@@ -40,4 +41,5 @@ export const ALL_ROUTES: RouteSpec[] = [
   ...calibrationRoutes,
   ...planRoutes,
   ...checkScheduleRoutes,
+  ...shelfLifeRoutes,
 ];

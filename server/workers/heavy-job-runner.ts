@@ -1,5 +1,6 @@
 import { parentPort } from 'node:worker_threads';
 import { CalibrationRefused, fitCalibration, type CalibrationObservation, type CalibrationOptions } from '../../shared/calibration';
+import { programmeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-compute';
 
 /**
@@ -9,6 +10,8 @@ import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-co
 const JOBS = {
   calibrationFit: (input: { observations: CalibrationObservation[]; options: CalibrationOptions }) => fitCalibration(input.observations, input.options),
   plan: (input: PlanJob) => computePlan(input),
+  shelfLife: (input: { recipes: ShelfLifeRecipeInput[]; samples: ShelfLifeSampleInput[]; focusRecipeId?: number }) =>
+    programmeShelfLife(input.recipes, input.samples, { focusRecipeId: input.focusRecipeId }),
 };
 export type HeavyJobName = keyof typeof JOBS;
 

@@ -38,6 +38,7 @@ const ALLOW: Record<string, Expectation> = {
   ...calibrations(),
   ...plans(),
   ...checkSchedules(),
+  'GET /api/programmes/:id/shelf-life': EVERY_ROLE,
 };
 
 function programmes(): Record<string, Expectation> {
