@@ -2,3 +2,4 @@
 export { sampleAgeDays } from './sample-age-days';
 export { nextCheckAge } from './next-check-age';
 export { dueSamples, type ScheduledCheck, type DueSample } from './due-samples';
+export { checkFromDue, type DueCheckAnswer } from './check-from-due';
