@@ -13,14 +13,14 @@ export class ApiError extends Error {
 
 type Json = Record<string, unknown> | unknown[];
 
-async function request<T>(method: string, path: string, body?: Json | FormData): Promise<T> {
+async function request<T>(method: string, path: string, body?: Json | FormData, extraHeaders: Record<string, string> = {}): Promise<T> {
   const isForm = typeof FormData !== 'undefined' && body instanceof FormData;
   let response: Response;
   try {
     response = await fetch(path, {
       method,
       credentials: 'same-origin',
-      headers: body && !isForm ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' },
+      headers: { ...(body && !isForm ? { 'Content-Type': 'application/json', Accept: 'application/json' } : { Accept: 'application/json' }), ...extraHeaders },
       body: body === undefined ? undefined : isForm ? (body as FormData) : JSON.stringify(body),
     });
   } catch {
@@ -45,7 +45,8 @@ async function request<T>(method: string, path: string, body?: Json | FormData):
 /** The one way the client talks to the API: JSON over same-origin fetch, session in a cookie. */
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
-  post: <T>(path: string, body?: Json | FormData) => request<T>('POST', path, body ?? {}),
+  /** `headers` for the few routes that read one, such as an Idempotency-Key. */
+  post: <T>(path: string, body?: Json | FormData, headers?: Record<string, string>) => request<T>('POST', path, body ?? {}, headers),
   patch: <T>(path: string, body: Json) => request<T>('PATCH', path, body),
   put: <T>(path: string, body: Json) => request<T>('PUT', path, body),
   delete: <T>(path: string) => request<T>('DELETE', path),

@@ -1,4 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { dueCheckKeys } from './due-check-keys';
 import { postImport } from './import-request';
 import { observationKeys } from './observation-keys';
 
@@ -10,7 +11,10 @@ export const commitImport = ({ file, idempotencyKey }: { file: File; idempotency
 
 export function useCommitImport() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: commitImport, onSuccess: () => queryClient.invalidateQueries({ queryKey: observationKeys.all }) });
+  return useMutation({
+    mutationFn: commitImport,
+    onSuccess: () => Promise.all([observationKeys.all, dueCheckKeys.all].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
+  });
 }
 
 /** 128 random bits as hex; getRandomValues works on plain-http installations, where randomUUID does not exist. */

@@ -3,13 +3,15 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/page';
 import { BenchLog } from './bench-log';
 import { CsvImport } from './csv-import';
+import { DueChecksPanel } from './due-checks-panel';
 import { RecordOutcomeForm } from './record-outcome-form';
 
 type Panel = 'record' | 'import' | null;
 
 /**
  * The bench log of one programme; for roles with `observations.write`, a panel above it to
- * record one outcome or import a batch. The log stays in view underneath either panel.
+ * record one outcome or import a batch; then the samples due for a check (one click records
+ * the look). The log stays in view underneath.
  */
 export function BenchScreen({ programmeId, canWrite }: { programmeId: number; canWrite: boolean }) {
   const [panel, setPanel] = useState<Panel>(null);
@@ -40,6 +42,7 @@ export function BenchScreen({ programmeId, canWrite }: { programmeId: number; ca
           </Card>
         </div>
       )}
+      <DueChecksPanel programmeId={programmeId} canWrite={canWrite} />
       <BenchLog programmeId={programmeId} />
     </div>
   );
