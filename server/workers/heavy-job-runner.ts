@@ -1,3 +1,4 @@
+import { setPriority } from 'node:os';
 import { parentPort } from 'node:worker_threads';
 import { CalibrationRefused, fitCalibration, type CalibrationObservation, type CalibrationOptions } from '../../shared/calibration';
 import { programmeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
@@ -14,6 +15,14 @@ const JOBS = {
     programmeShelfLife(input.recipes, input.samples, { focusRecipeId: input.focusRecipeId }),
 };
 export type HeavyJobName = keyof typeof JOBS;
+
+// On Linux a priority set from a thread applies to that thread only: a long fit yields the CPU to
+// the request thread (answering everyone else) whenever both want it. Best effort elsewhere.
+try {
+  setPriority(19);
+} catch {
+  // not permitted or not supported: the job still runs, at normal priority
+}
 
 // One job per message; the thread stays warm for the next (server/services/heavy-jobs.ts pools it).
 parentPort!.on('message', ({ job, input }: { job: HeavyJobName; input: never }) => {
