@@ -44,6 +44,15 @@ describe('shelf life on the recipe page', () => {
     expect(await panel.textContent()).toContain('2 collapses in 3 samples');
     await page.getByRole('img', { name: /still standing against age/ }).waitFor();
     expect(await page.getByTestId('stiffening').textContent()).toMatch(/G′ rises by [\d.]+ Pa per tenfold age .*it stiffens as it ages/);
+    // Gels like it: the recipe is alone in its group and its region, so both curves are its own (same figures).
+    const similar = page.getByTestId('similar-survival');
+    await similar.waitFor();
+    expect(await similar.getByRole('region', { name: 'Similar recipes' }).textContent()).toContain('Half collapsed by 35 days');
+    await page.getByRole('img', { name: /similar recipes' gel samples still standing/ }).waitFor();
+    // Two collapses are far below the ten a proportional-hazards fit needs (MIN_COX_EVENTS).
+    const drivers = page.getByTestId('collapse-drivers');
+    expect(await drivers.getByTestId('collapse-drivers-refused').textContent()).toContain('Cannot fit what drives collapse: 2 collapses seen; at least 10 are needed.');
+    expect(await drivers.textContent()).toMatch(/sample height \(not recorded on the bench log.*Starrs, Poon, Hibberd & Robins/);
     await page.getByText("Where this map's lines come from").click();
     expect(await page.getByTestId('line-sources').textContent()).toContain('mode-coupling');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);

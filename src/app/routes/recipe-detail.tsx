@@ -21,6 +21,9 @@ import { useMapPoints } from '@/features/map/api/get-map-points';
 import { nearbyEvidence } from '@/features/recipes/components/nearby-evidence';
 import { BenchSurvival } from '@/features/recipes/components/bench-survival';
 import { ShelfLifePanel } from '@/features/recipes/components/shelf-life-panel';
+import { SimilarSurvival } from '@/features/recipes/components/similar-survival';
+import { CollapseDrivers } from '@/features/recipes/components/collapse-drivers';
+import { useProgrammeShelfLife } from '@/features/shelf-life';
 
 export function RecipeDetailRoute() {
   const { code = '' } = useParams();
@@ -30,6 +33,7 @@ export function RecipeDetailRoute() {
   const map = useRecipeMap(recipe.data);
   const archive = useArchiveRecipe();
   const points = useMapPoints(recipe.data?.programmeId);
+  const shelfLife = useProgrammeShelfLife(recipe.data?.programmeId, recipe.data?.id ?? null, recipe.data !== undefined);
   if (recipe.isPending) return <Loading label="Loading the recipe…" />;
   if (recipe.isError) return recipe.error instanceof ApiError && recipe.error.status === 404 ? <Notice tone="warning" title={`No recipe has the code ${code}`}>Check the code, or <Link to="/find">search for it</Link>.</Notice> : <ErrorState error={recipe.error} retry={() => recipe.refetch()} />;
   const r = recipe.data;
@@ -74,6 +78,28 @@ export function RecipeDetailRoute() {
               <BenchSurvival checks={observations.data ?? null} />
             </div>
             <ShelfLifePanel derived={r.derived} evidence={points.data ? nearbyEvidence(r.id, r.derived, points.data) : null} />
+          </Card>
+          <Card title="Gels like it">
+            {shelfLife.isPending ? (
+              <Loading label="Pooling the programme's bench…" />
+            ) : shelfLife.isError ? (
+              <ErrorState error={shelfLife.error} retry={() => shelfLife.refetch()} />
+            ) : (
+              <SimilarSurvival
+                group={shelfLife.data.groups[0] ?? null}
+                region={shelfLife.data.regions.find((g) => g.region === shelfLife.data.recipes[0]?.region) ?? null}
+                rules={shelfLife.data.rules}
+              />
+            )}
+          </Card>
+          <Card title="What drives collapse">
+            {shelfLife.isPending ? (
+              <Loading label="Fitting what drives collapse…" />
+            ) : shelfLife.isError ? (
+              <ErrorState error={shelfLife.error} retry={() => shelfLife.refetch()} />
+            ) : (
+              <CollapseDrivers model={shelfLife.data.drivers} prediction={shelfLife.data.recipes[0]?.predicted?.reading ?? null} context={shelfLife.data.context} />
+            )}
           </Card>
           <Card title="Bench outcomes by age">
             {observations.isPending ? <Loading /> : observations.isError ? <ErrorState error={observations.error} /> : <ObservationTimeline observations={observations.data} />}
