@@ -15,6 +15,7 @@ import { useRecipe } from '@/features/recipes/api/get-recipe';
 import { useRecipeObservations } from '@/features/recipes/api/get-recipe-observations';
 import { DerivedPanel } from '@/features/recipes/components/derived-panel';
 import { ObservationTimeline } from '@/features/recipes/components/observation-timeline';
+import { CheckScheduleForm } from '@/features/recipes/components/check-schedule-form';
 import { RecipeComposition } from '@/features/recipes/components/recipe-composition';
 import { useRecipeMap } from '@/features/recipes/hooks/use-recipe-map';
 import { useMapPoints } from '@/features/map/api/get-map-points';
@@ -115,6 +116,9 @@ export function RecipeDetailRoute() {
           </Card>
           <Card title="Composition">
             <RecipeComposition recipe={r} />
+          </Card>
+          <Card title="Check schedule">
+            <CheckScheduleForm recipeId={r.id} canWrite={can(user?.role, 'observations.write') && !r.archived} />
           </Card>
           <SafetyNote />
         </div>
