@@ -1,7 +1,7 @@
 import type { Express, NextFunction, Request, RequestHandler, Response } from 'express';
 import { can } from '../../shared/permissions';
 import { badRequest, forbidden, payloadTooLarge, unauthorized, unsupportedMediaType } from '../errors';
-import { recordAudit } from '../services/audit';
+import { recordAudit } from '../models/audit-event';
 import { currentUser } from './authenticate';
 import type { AppDeps, HandlerContext, LimiterName, RouteSpec } from './route';
 import { parseOrThrow } from './validate';

@@ -5,7 +5,7 @@ import type { Capability } from '../../shared/permissions';
 import type { Config } from '../config';
 import type { Mailer } from '../mail/mailer';
 import type { User } from '../models';
-import type { AuditInput } from '../services/audit';
+import type { AuditInput } from '../models/audit-event';
 
 /** Who may call a route: anyone, any signed-in user, or the roles holding a capability. */
 export type Access = 'public' | 'signedIn' | Capability;

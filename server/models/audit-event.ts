@@ -1,4 +1,4 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, QueryTypes, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize, type Transaction } from 'sequelize';
 
 /** Who did what to which record, when and from where. Rows are only ever added. */
 export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreationAttributes<AuditEvent>> {
@@ -26,4 +26,37 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
       { sequelize, tableName: 'audit_events', modelName: 'AuditEvent', updatedAt: false },
     );
   }
+}
+
+export interface AuditInput {
+  actorId: number | null;
+  action: string;
+  entityType: string;
+  entityId?: string | number | null;
+  details?: Record<string, unknown> | null;
+  ip?: string | null;
+}
+
+/**
+ * One fixed statement: every write appends an audit row, so this skips the model's build,
+ * validation and query building (the columns are bounded here instead). created_at is the
+ * database's clock in UTC (the pool sets time_zone '+00:00').
+ */
+const INSERT_AUDIT =
+  'INSERT INTO audit_events (actor_id, action, entity_type, entity_id, details, ip, created_at) VALUES (?, ?, ?, ?, ?, ?, NOW(3))';
+
+/** Appends one audit event, inside the caller's transaction when it has one. */
+export async function recordAudit(event: AuditInput, transaction?: Transaction) {
+  await AuditEvent.sequelize!.query(INSERT_AUDIT, {
+    type: QueryTypes.INSERT,
+    transaction,
+    replacements: [
+      event.actorId,
+      event.action.slice(0, 64),
+      event.entityType.slice(0, 40),
+      event.entityId === undefined || event.entityId === null ? null : String(event.entityId).slice(0, 64),
+      event.details ? JSON.stringify(event.details) : null,
+      event.ip ? event.ip.slice(0, 64) : null,
+    ],
+  });
 }

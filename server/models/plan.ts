@@ -2,9 +2,15 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { PlanRequest } from '../../shared/schemas/plans';
 import { GOAL_STATES, type GoalState } from '../../shared/states';
 import type { PlanView } from '../../shared/views/plan';
+import type { PlanRecipe } from './plan-recipe';
+import type { Recipe } from './recipe';
+import type { User } from './user';
 
 /** What a plan stored besides its inputs: the view's parts that do not change after the run. */
 export type StoredPlanOutcome = Omit<PlanView, 'id' | 'programmeId' | 'title' | 'targetState' | 'source' | 'inputs' | 'modelVersion' | 'recipes' | 'createdBy' | 'createdAt'>;
+
+/** A plan as loaded with its author and the recipes made from it (services/plans.ts loadPlan). */
+export type LoadedPlan = Plan & { creator?: User | null; made?: (PlanRecipe & { recipe?: Recipe })[] };
 
 /** One planner run: what was asked, with which model and calibration, and what it found. Never changed after. */
 export class Plan extends Model<InferAttributes<Plan>, InferCreationAttributes<Plan>> {

@@ -1,6 +1,6 @@
 import type { PlanRecipeRef, PlanSummaryView, PlanView } from '../../shared/views/plan';
 import type { Plan, User } from '../models';
-import type { LoadedPlan } from '../services/plans';
+import type { LoadedPlan } from '../models/plan';
 
 const person = (u: User | null | undefined) => (u ? { id: u.id, name: u.name } : null);
 

@@ -1,22 +1,6 @@
 import type { Recipe } from '../models';
-import { recipeAttraction } from '../presenters/recipe';
+import { snapshotOf } from '../models/recipe-shapes';
 import type { RecipeDifference, RecipeSnapshot } from '../../shared/views/team-data';
-
-/** The recipe as it stands now, as a shortlist keeps it. */
-export function snapshotOf(recipe: Recipe): RecipeSnapshot {
-  return {
-    version: recipe.version,
-    code: recipe.code,
-    name: recipe.name,
-    particleId: recipe.particleId,
-    solventId: recipe.solventId,
-    fraction: { kind: recipe.fractionKind, value: recipe.fractionValue },
-    temperatureC: recipe.temperatureC,
-    attraction: recipeAttraction(recipe),
-    derived: recipe.derived,
-    takenAt: new Date().toISOString(),
-  };
-}
 
 type Value = string | number | null;
 type Reader = [field: string, label: string, read: (s: RecipeSnapshot) => Value];

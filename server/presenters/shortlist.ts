@@ -1,6 +1,6 @@
 import type { Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
 import type { ShortlistItemView, ShortlistView } from '../../shared/views/team-data';
-import { differencesSince } from '../services/recipe-snapshots';
+import { differencesSince } from './recipe-differences';
 
 type Loaded = Shortlist & {
   items?: (ShortlistItem & { recipe?: Recipe })[];

@@ -3,7 +3,7 @@ import type { Config } from '../config';
 import type { Role } from '../../shared/roles';
 import { User } from '../models';
 import { hashPassword } from '../services/passwords';
-import { recordAudit } from '../services/audit';
+import { recordAudit } from '../models/audit-event';
 import { seedDemoScenario } from './demo-scenario';
 import { randomBytes } from 'node:crypto';
 

@@ -4,8 +4,10 @@ import { extname, join, resolve } from 'node:path';
 import { fileTypeFromBuffer } from 'file-type';
 import multer from 'multer';
 import type { RequestHandler } from 'express';
-import { badRequest } from '../errors';
-import type { AppDeps } from '../http/route';
+import { badRequest, notFound } from '../errors';
+import type { AppDeps, HandlerContext } from '../http/route';
+import { Attachment } from '../models';
+import { lockOwnObservation } from './observations';
 
 /** What may be attached: micrographs by their bytes, instrument exports as clean text. */
 const IMAGE_TYPES: Record<string, string> = { 'image/png': 'png', 'image/jpeg': 'jpg', 'image/tiff': 'tif' };
@@ -90,4 +92,51 @@ export async function storeBytes(deps: AppDeps, file: SniffedFile) {
 export function storedPath(deps: AppDeps, storedName: string) {
   if (!/^[0-9a-f-]{36}\.[a-z]{3,4}$/.test(storedName)) throw new Error('bad stored name');
   return join(attachmentsDir(deps), storedName.slice(0, 2), storedName);
+}
+
+/** A live attachment, or a 404 (also for an archived one). */
+export async function loadLiveAttachment(id: number) {
+  const attachment = await Attachment.findByPk(id);
+  if (!attachment || attachment.archivedAt) throw notFound('Attachment');
+  return attachment;
+}
+
+/** Archives an attachment of an observation the user may change (its observer or an administrator). */
+export async function archiveAttachment(ctx: HandlerContext<unknown, unknown, unknown>, id: number) {
+  const attachment = await Attachment.findByPk(id, { transaction: ctx.transaction, lock: ctx.transaction?.LOCK.UPDATE });
+  if (!attachment) throw notFound('Attachment');
+  await lockOwnObservation(ctx, attachment.observationId);
+  if (!attachment.archivedAt) {
+    attachment.archivedAt = new Date();
+    await attachment.save({ transaction: ctx.transaction });
+    await ctx.audit({ action: 'attachment.archived', entityType: 'attachment', entityId: attachment.id });
+  }
+  return attachment;
+}
+
+/**
+ * Attaches uploaded files to an observation the user may change. Every file is checked before
+ * any is written: one bad file refuses the whole upload; files written before a failure are removed.
+ */
+export async function attachFiles(ctx: HandlerContext<unknown, unknown, unknown>, observationId: number, files: Express.Multer.File[]) {
+  const observation = await lockOwnObservation(ctx, observationId);
+  const sniffed = await Promise.all(files.map((f, i) => sniff(f, i)));
+  const written: { remove: () => Promise<void> }[] = [];
+  try {
+    const created: Attachment[] = [];
+    for (const file of sniffed) {
+      const stored = await storeBytes(ctx.deps, file);
+      written.push(stored);
+      const row = await Attachment.create(
+        { observationId: observation.id, originalName: file.originalName, storedName: stored.storedName, mimeType: file.mimeType, sizeBytes: file.buffer.length, sha256: file.sha256, uploaderId: ctx.user!.id },
+        { transaction: ctx.transaction },
+      );
+      await ctx.audit({ action: 'attachment.uploaded', entityType: 'attachment', entityId: row.id, details: { observationId: observation.id, type: file.mimeType, bytes: file.buffer.length } });
+      created.push(row);
+    }
+    return created;
+  } catch (error) {
+    await Promise.all(written.map((w) => w.remove()));
+    throw error;
+  }
 }

@@ -1,35 +1,26 @@
-import { QueryTypes, type Transaction } from 'sequelize';
-import { AuditEvent } from '../models';
-
-export interface AuditInput {
-  actorId: number | null;
-  action: string;
-  entityType: string;
-  entityId?: string | number | null;
-  details?: Record<string, unknown> | null;
-  ip?: string | null;
-}
+import type { AuditQuery } from '../../shared/schemas/team';
+import { AuditEvent, User } from '../models';
+import { paged } from './paging';
 
 /**
- * One fixed statement: every write appends an audit row, so this skips the model's build,
- * validation and query building (the columns are bounded here instead). created_at is the
- * database's clock in UTC (the pool sets time_zone '+00:00').
+ * Writing an audit event is one fixed statement beside its model (`recordAudit` in
+ * server/models/audit-event.ts), used by the request pipeline's `ctx.audit` and by services;
+ * re-exported here for the seeds.
  */
-const INSERT_AUDIT =
-  'INSERT INTO audit_events (actor_id, action, entity_type, entity_id, details, ip, created_at) VALUES (?, ?, ?, ?, ?, ?, NOW(3))';
+export { recordAudit, type AuditInput } from '../models/audit-event';
 
-/** Appends one audit event, inside the caller's transaction when it has one. */
-export async function recordAudit(event: AuditInput, transaction?: Transaction) {
-  await AuditEvent.sequelize!.query(INSERT_AUDIT, {
-    type: QueryTypes.INSERT,
-    transaction,
-    replacements: [
-      event.actorId,
-      event.action.slice(0, 64),
-      event.entityType.slice(0, 40),
-      event.entityId === undefined || event.entityId === null ? null : String(event.entityId).slice(0, 64),
-      event.details ? JSON.stringify(event.details) : null,
-      event.ip ? event.ip.slice(0, 64) : null,
-    ],
+export type AuditEventWithActor = AuditEvent & { actor?: User | null };
+
+/** One page of the audit trail, newest first, by action and actor. */
+export async function listAuditEvents(query: AuditQuery) {
+  const where: Record<string, unknown> = {};
+  if (query.action) where.action = query.action;
+  if (query.actorId) where.actorId = query.actorId;
+  const { rows, count } = await AuditEvent.findAndCountAll({
+    where,
+    include: [{ model: User, as: 'actor', attributes: ['id', 'name', 'email'] }],
+    order: [['id', 'DESC']],
+    ...paged(query),
   });
+  return { rows: rows as AuditEventWithActor[], count };
 }

@@ -5,13 +5,12 @@ import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import { PHYSICS_MODEL_VERSION, PhysicsArgumentError, type StateMap } from '../../shared/physics';
 import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
-import type { RecipeInput } from '../../shared/schemas/recipes';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { PredictionRecompute } from '../../shared/views/calibration';
 import { conflict, HttpError, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { Calibration, Depletant, Observation, ParticleSystem, Recipe, Salt, Solvent, User } from '../models';
-import { recipeAttraction } from '../presenters/recipe';
+import { recipeInputOf } from '../models/recipe-shapes';
 import { requireProgramme } from './lookups';
 import { adhocPrediction, programmeParameters } from './predictions';
 
@@ -39,20 +38,6 @@ export async function loadCalibration(programmeId: number, id: number, transacti
   });
   if (!calibration) throw notFound('Calibration');
   return calibration;
-}
-
-/** The form input of a stored recipe (what deriveRecipe reads). */
-function recipeInputOf(recipe: Recipe): RecipeInput {
-  return {
-    programmeId: recipe.programmeId,
-    name: recipe.name,
-    particleId: recipe.particleId,
-    solventId: recipe.solventId,
-    fraction: { kind: recipe.fractionKind, value: recipe.fractionValue },
-    temperatureC: recipe.temperatureC,
-    attraction: recipeAttraction(recipe),
-    ...(recipe.notes ? { notes: recipe.notes } : {}),
-  };
 }
 
 /** The library rows of many recipes with one query per kind of material. */

@@ -1,4 +1,4 @@
-import type { Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { badRequest, notFound } from '../errors';
 import { Programme } from '../models';
 
@@ -18,3 +18,8 @@ export async function requireLiveProgramme(id: number, transaction: Transaction 
 
 /** Escapes LIKE wildcards in user text. */
 export const likePattern = (text: string) => `%${text.replace(/[%_\\]/g, '\\$&')}%`;
+
+/** The where-clause of an `archived` list filter: live rows ('false'), archived ones ('true') or all. */
+export function archivedWhere(archived: 'true' | 'false' | 'all'): Record<string | symbol, unknown> {
+  return archived === 'all' ? {} : { archivedAt: archived === 'true' ? { [Op.ne]: null } : null };
+}

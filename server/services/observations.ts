@@ -6,6 +6,7 @@ import type { HandlerContext } from '../http/route';
 import { programmeWritten } from '../http/write-events';
 import { Attachment, Observation, Programme, Recipe, User } from '../models';
 import { requireLiveProgramme } from './lookups';
+import { paged } from './paging';
 import { claimIdempotencyKey, idempotencyKeyOf, sha256 } from './idempotency';
 import { presentObservation } from '../presenters/observation';
 import { predictAdhoc } from './predictions';
@@ -17,6 +18,17 @@ export const observationIncludes = () => [
   { model: User, as: 'observer', attributes: ['id', 'name'] },
   { model: Attachment, as: 'attachments', include: [{ model: User, as: 'uploader', attributes: ['id', 'name'] }] },
 ];
+
+/** One page of the bench log, newest first, with the list's filters. */
+export async function listObservations(query: ObservationListQuery) {
+  return Observation.findAndCountAll({
+    where: observationWhere(query),
+    include: observationIncludes(),
+    order: [['mixedAt', 'DESC'], ['id', 'DESC']],
+    ...paged(query),
+    distinct: true,
+  });
+}
 
 export async function loadObservation(id: number, transaction: Transaction | null) {
   const observation = await Observation.findByPk(id, { include: observationIncludes(), transaction });

@@ -8,7 +8,8 @@ import type { HandlerContext } from '../http/route';
 import { PlanRecipe, Recipe, type ShortlistItem } from '../models';
 import { createRecipe } from './recipes';
 import { createShortlist, loadShortlist, updateShortlist } from './shortlists';
-import { loadPlan, planTemplate, type LoadedPlan } from './plans';
+import type { LoadedPlan } from '../models/plan';
+import { loadPlan, planTemplate } from './plans';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 

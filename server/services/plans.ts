@@ -21,8 +21,9 @@ import type { RecipeDerived } from '../../shared/views/team-data';
 import { badRequest, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { Calibration, Depletant, ParticleSystem, Plan, PlanRecipe, Recipe, Salt, Solvent, User } from '../models';
-import type { StoredPlanOutcome } from '../models/plan';
+import type { LoadedPlan, StoredPlanOutcome } from '../models/plan';
 import { requireProgramme } from './lookups';
+import { paged } from './paging';
 import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import { buildMapPoints } from './map-points';
 import { programmeParameters, recipeMaterials } from './predictions';
@@ -110,8 +111,6 @@ export async function runPlan(ctx: Ctx, input: PlanRequest) {
   return loadPlan(created.id, ctx.transaction);
 }
 
-export type LoadedPlan = Plan & { creator?: User | null; made?: (PlanRecipe & { recipe?: Recipe })[] };
-
 /** A plan with its author and the recipes made from it. */
 export async function loadPlan(id: number, transaction: Transaction | null, lock = false): Promise<LoadedPlan> {
   const plan = await Plan.findByPk(id, {
@@ -134,8 +133,7 @@ export async function listPlans(query: PlanListQuery) {
     attributes: { exclude: ['outcome', 'inputs'] },
     include: [{ model: User, as: 'creator', attributes: ['id', 'name'] }],
     order: [['createdAt', 'DESC'], ['id', 'DESC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
+    ...paged(query),
   });
   const made = rows.length
     ? ((await PlanRecipe.findAll({ attributes: ['planId', [Sequelize.fn('COUNT', Sequelize.col('id')), 'n']], where: { planId: { [Op.in]: rows.map((r) => r.id) } }, group: ['planId'], raw: true })) as unknown as { planId: number; n: number }[])

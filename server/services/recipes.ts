@@ -3,8 +3,9 @@ import type { RecipeInput, RecipeListQuery } from '../../shared/schemas/recipes'
 import { badRequest, conflict, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { Recipe, User } from '../models';
-import { attractionColumns } from '../presenters/recipe';
-import { likePattern, requireProgramme } from './lookups';
+import { attractionColumns } from '../models/recipe-shapes';
+import { archivedWhere, likePattern, requireProgramme } from './lookups';
+import { paged } from './paging';
 import { deriveForRecipe } from './predictions';
 import { standingShortlistsWith } from './shortlists';
 
@@ -20,8 +21,7 @@ const SORT_COLUMNS: Record<RecipeListQuery['sort'], string> = {
 };
 
 export async function listRecipes(query: RecipeListQuery) {
-  const where: Record<string | symbol, unknown> = {};
-  if (query.archived !== 'all') where.archivedAt = query.archived === 'true' ? { [Op.ne]: null } : null;
+  const where: Record<string | symbol, unknown> = archivedWhere(query.archived);
   if (query.programme) where.programmeId = query.programme;
   if (query.state) where.predictedState = query.state;
   if (query.q) {
@@ -32,8 +32,7 @@ export async function listRecipes(query: RecipeListQuery) {
     where,
     include: [{ model: User, as: 'creator', attributes: ['id', 'name'] }],
     order: [[SORT_COLUMNS[query.sort], query.order.toUpperCase()], ['id', 'ASC']],
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
+    ...paged(query),
   });
 }
 

@@ -1,15 +1,38 @@
 import { Op, type Transaction } from 'sequelize';
 import { can } from '../../shared/permissions';
 import { SHORTLIST_TRANSITIONS, type ShortlistStatus } from '../../shared/states';
-import type { ShortlistInput } from '../../shared/schemas/shortlists';
+import type { ShortlistInput, ShortlistListQuery } from '../../shared/schemas/shortlists';
 import { badRequest, conflict, forbidden, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { shortlistDecidedMail, shortlistSubmittedMail } from '../mail/shortlist-mails';
 import { Programme, Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
 import { requireLiveProgramme } from './lookups';
-import { snapshotOf } from './recipe-snapshots';
+import { paged } from './paging';
+import { snapshotOf } from '../models/recipe-shapes';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
+
+/** One page of the live shortlists, by programme and status, last changed first, with how many recipes each holds. */
+export async function listShortlists(query: ShortlistListQuery) {
+  const where: Record<string, unknown> = { archivedAt: null };
+  if (query.programme) where.programmeId = query.programme;
+  if (query.status) where.status = query.status;
+  const { rows, count } = await Shortlist.findAndCountAll({
+    where,
+    include: [
+      { model: User, as: 'author', attributes: ['id', 'name'] },
+      { model: User, as: 'reviewer', attributes: ['id', 'name'] },
+    ],
+    order: [['updatedAt', 'DESC']],
+    ...paged(query),
+    distinct: true,
+  });
+  const counted = rows.length
+    ? await ShortlistItem.count({ where: { shortlistId: { [Op.in]: rows.map((r) => r.id) } }, group: ['shortlistId'] })
+    : [];
+  const itemCounts = new Map((counted as unknown as { shortlistId: number; count: number }[]).map((c) => [c.shortlistId, Number(c.count)]));
+  return { rows, count, itemCounts };
+}
 
 /** A shortlist with everything its view shows. */
 export async function loadShortlist(id: number, transaction: Transaction | null) {

@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
 import { LIMITS } from '../../shared/limits';
+import type { PageQuery } from '../../shared/schemas/common';
 import type { CreateInvitationInput, UpdateUserInput } from '../../shared/schemas/team';
 import { conflict, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
@@ -8,6 +9,7 @@ import { User } from '../models';
 import type { HttpError } from '../errors';
 import type { TokenPurpose } from '../models/user-token';
 import { findLiveToken, issueToken, revokeTokens } from './one-time-links';
+import { paged } from './paging';
 import { hashPassword } from './passwords';
 import { endSessions } from './sessions';
 
@@ -15,6 +17,11 @@ type Ctx = HandlerContext<unknown, unknown, unknown>;
 
 function link(ctx: Ctx, path: string, token: string) {
   return new URL(`${path}?token=${encodeURIComponent(token)}`, ctx.deps.config.PUBLIC_URL).toString();
+}
+
+/** One page of everyone in the installation, by name. */
+export async function listUsers(query: PageQuery) {
+  return User.findAndCountAll({ order: [['name', 'ASC']], ...paged(query) });
 }
 
 /**

@@ -46,6 +46,8 @@ export const pageQuerySchema = z.object({
     .default(LIMITS.pageSizeDefault),
 });
 
+export type PageQuery = z.infer<typeof pageQuerySchema>;
+
 /** A finite number within [min, max], with the field's unit in the message. */
 export function boundedNumber(label: string, min: number, max: number, unit = '') {
   const suffix = unit ? ` ${unit}` : '';

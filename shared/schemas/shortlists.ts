@@ -33,3 +33,4 @@ export const shortlistListQuerySchema = pageQuerySchema.extend({
   programme: decimalId('programme').optional(),
   status: z.enum(SHORTLIST_STATUSES).optional(),
 });
+export type ShortlistListQuery = z.infer<typeof shortlistListQuerySchema>;

@@ -29,7 +29,9 @@ export const auditQuerySchema = pageQuerySchema.extend({
   action: z.string().max(64).optional(),
   actorId: decimalId('actorId').optional(),
 });
+export type AuditQuery = z.infer<typeof auditQuerySchema>;
 
 export const outboxQuerySchema = pageQuerySchema.extend({
   to: z.string().max(254).optional(),
 });
+export type OutboxQuery = z.infer<typeof outboxQuerySchema>;

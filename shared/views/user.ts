@@ -12,9 +12,5 @@ export interface UserView {
   createdAt: string;
 }
 
-export interface Page<T> {
-  items: T[];
-  total: number;
-  page: number;
-  pageSize: number;
-}
+/** Kept here for the client's imports; the type lives in ./page. */
+export type { Page } from './page';

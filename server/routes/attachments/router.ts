@@ -1,12 +1,9 @@
 import { createReadStream } from 'node:fs';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/common';
-import { notFound } from '../../errors';
 import { route } from '../../http/route';
-import { Attachment } from '../../models';
 import { presentAttachment } from '../../presenters/observation';
-import { storedPath } from '../../services/attachments';
-import { lockOwnObservation } from '../../services/observations';
+import { archiveAttachment, loadLiveAttachment, storedPath } from '../../services/attachments';
 
 const INLINE = new Set(['image/png', 'image/jpeg']);
 
@@ -19,8 +16,7 @@ export const attachmentRoutes = [
     params: idParamSchema,
     query: z.object({ inline: z.enum(['true', 'false']).default('false') }),
     async handler({ params, query, res, deps }) {
-      const attachment = await Attachment.findByPk(params.id);
-      if (!attachment || attachment.archivedAt) throw notFound('Attachment');
+      const attachment = await loadLiveAttachment(params.id);
       const inline = query.inline === 'true' && INLINE.has(attachment.mimeType);
       const asciiName = attachment.originalName.replace(/[^\x20-\x7E]/g, '_').replace(/"/g, "'");
       res.setHeader('Content-Type', attachment.mimeType);
@@ -43,15 +39,7 @@ export const attachmentRoutes = [
     summary: 'Archive an attachment of an observation you recorded',
     params: idParamSchema,
     async handler(ctx) {
-      const attachment = await Attachment.findByPk(ctx.params.id, { transaction: ctx.transaction, lock: ctx.transaction?.LOCK.UPDATE });
-      if (!attachment) throw notFound('Attachment');
-      await lockOwnObservation(ctx, attachment.observationId);
-      if (!attachment.archivedAt) {
-        attachment.archivedAt = new Date();
-        await attachment.save({ transaction: ctx.transaction });
-        await ctx.audit({ action: 'attachment.archived', entityType: 'attachment', entityId: attachment.id });
-      }
-      return { body: { attachment: presentAttachment(attachment) } };
+      return { body: { attachment: presentAttachment(await archiveAttachment(ctx, ctx.params.id)) } };
     },
   }),
 ];

@@ -3,15 +3,13 @@ import { idParamSchema } from '../../../shared/schemas/common';
 import { observationInputSchema, observationListQuerySchema } from '../../../shared/schemas/observations';
 import { badRequest } from '../../errors';
 import { route } from '../../http/route';
-import { Observation } from '../../models';
-import { presentObservation } from '../../presenters/observation';
-import { attachmentUpload, csvUpload, sniff, storeBytes } from '../../services/attachments';
+import { presentAttachment, presentObservation } from '../../presenters/observation';
+import { presentPage } from '../../presenters/page';
+import { attachFiles, attachmentUpload, csvUpload } from '../../services/attachments';
 import { importObservations } from '../../services/observation-import';
 import { streamObservationCsv } from '../../services/observation-export';
 import { withHeavyJobSlot } from '../../services/heavy-jobs';
-import { archiveObservation, recordObservationOnce, loadObservation, lockOwnObservation, observationIncludes, observationWhere, requireOwnObservation, updateObservation } from '../../services/observations';
-import { Attachment } from '../../models';
-import { presentAttachment } from '../../presenters/observation';
+import { archiveObservation, listObservations, loadObservation, recordObservationOnce, requireOwnObservation, updateObservation } from '../../services/observations';
 
 export const observationRoutes = [
   route({
@@ -21,16 +19,8 @@ export const observationRoutes = [
     summary: 'The bench log, newest first, with filters',
     query: observationListQuerySchema,
     async handler({ query }) {
-      const { rows, count } = await Observation.findAndCountAll({
-        where: observationWhere(query),
-        include: observationIncludes(),
-        order: [['mixedAt', 'DESC'], ['id', 'DESC']],
-        limit: query.pageSize,
-        offset: (query.page - 1) * query.pageSize,
-        distinct: true,
-      });
-      const items = rows.map(presentObservation);
-      return { body: { items, total: count, page: query.page, pageSize: query.pageSize } };
+      const { rows, count } = await listObservations(query);
+      return { body: presentPage(query, rows.map(presentObservation), count) };
     },
   }),
   route({
@@ -111,27 +101,7 @@ export const observationRoutes = [
     async handler(ctx) {
       const files = (ctx.req.files as Express.Multer.File[] | undefined) ?? [];
       if (files.length === 0) throw badRequest('files: attach at least one file under the field name "files"', 'files');
-      const observation = await lockOwnObservation(ctx, ctx.params.id);
-      // Every file is checked before any is written: one bad file refuses the whole upload.
-      const sniffed = await Promise.all(files.map((f, i) => sniff(f, i)));
-      const written: { remove: () => Promise<void> }[] = [];
-      try {
-        const created = [];
-        for (const file of sniffed) {
-          const stored = await storeBytes(ctx.deps, file);
-          written.push(stored);
-          const row = await Attachment.create(
-            { observationId: observation.id, originalName: file.originalName, storedName: stored.storedName, mimeType: file.mimeType, sizeBytes: file.buffer.length, sha256: file.sha256, uploaderId: ctx.user!.id },
-            { transaction: ctx.transaction },
-          );
-          await ctx.audit({ action: 'attachment.uploaded', entityType: 'attachment', entityId: row.id, details: { observationId: observation.id, type: file.mimeType, bytes: file.buffer.length } });
-          created.push(row);
-        }
-        return { status: 201, body: { attachments: created.map(presentAttachment) } };
-      } catch (error) {
-        await Promise.all(written.map((w) => w.remove()));
-        throw error;
-      }
+      return { status: 201, body: { attachments: (await attachFiles(ctx, ctx.params.id, files)).map(presentAttachment) } };
     },
   }),
 ];

@@ -1,6 +1,7 @@
 import { idParamSchema } from '../../../shared/schemas/common';
 import { planExperimentRecipesSchema, planInputSchema, planListQuerySchema, planRecipesSchema } from '../../../shared/schemas/plans';
 import { route } from '../../http/route';
+import { presentPage } from '../../presenters/page';
 import { presentPlan, presentPlanSummary } from '../../presenters/plan';
 import { presentRecipe } from '../../presenters/recipe';
 import { presentShortlist } from '../../presenters/shortlist';
@@ -16,7 +17,7 @@ export const planRoutes = [
     query: planListQuerySchema,
     async handler({ query }) {
       const { rows, count, counts } = await listPlans(query);
-      return { body: { items: rows.map((p) => presentPlanSummary(p, counts.get(p.id) ?? 0)), total: count, page: query.page, pageSize: query.pageSize } };
+      return { body: presentPage(query, rows.map((p) => presentPlanSummary(p, counts.get(p.id) ?? 0)), count) };
     },
   }),
   route({

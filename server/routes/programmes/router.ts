@@ -1,23 +1,10 @@
-import { Op, QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { programmeInputSchema, programmeUpdateSchema } from '../../../shared/schemas/programmes';
 import { route } from '../../http/route';
-import { conflict } from '../../errors';
-import { Programme } from '../../models';
 import { presentProgramme } from '../../presenters/programme';
 import { requireProgramme } from '../../services/lookups';
-
-async function countsByProgramme(sequelize: import('sequelize').Sequelize) {
-  const rows = await sequelize.query<{ id: number; recipes: number; observations: number }>(
-    `SELECT p.id,
-            (SELECT COUNT(*) FROM recipes r WHERE r.programme_id = p.id AND r.archived_at IS NULL) AS recipes,
-            (SELECT COUNT(*) FROM observations o WHERE o.programme_id = p.id AND o.archived_at IS NULL) AS observations
-       FROM programmes p`,
-    { type: QueryTypes.SELECT },
-  );
-  return new Map(rows.map((r) => [Number(r.id), { recipes: Number(r.recipes), observations: Number(r.observations) }]));
-}
+import { archiveProgramme, countsByProgramme, createProgramme, listProgrammes, updateProgramme } from '../../services/programmes';
 
 export const programmeRoutes = [
   route({
@@ -26,12 +13,10 @@ export const programmeRoutes = [
     access: 'data.read',
     summary: 'Programmes with their recipe and observation counts',
     query: z.object({ archived: z.enum(['true', 'false', 'all']).default('false') }),
-    async handler({ query, deps }) {
-      const where = query.archived === 'all' ? {} : { archivedAt: query.archived === 'true' ? { [Op.ne]: null } : null };
-      const rows = await Programme.findAll({ where, order: [['name', 'ASC']] });
-      const counts = await countsByProgramme(deps.sequelize);
-      const items = rows.map((p) => presentProgramme(p, counts.get(p.id)));
-      return { body: { items } };
+    async handler({ query }) {
+      const rows = await listProgrammes(query.archived);
+      const counts = await countsByProgramme();
+      return { body: { items: rows.map((p) => presentProgramme(p, counts.get(p.id))) } };
     },
   }),
   route({
@@ -40,9 +25,9 @@ export const programmeRoutes = [
     access: 'data.read',
     summary: 'One programme',
     params: idParamSchema,
-    async handler({ params, deps }) {
+    async handler({ params }) {
       const programme = await requireProgramme(params.id, null, 'param');
-      const counts = await countsByProgramme(deps.sequelize);
+      const counts = await countsByProgramme();
       return { body: { programme: presentProgramme(programme, counts.get(programme.id)) } };
     },
   }),
@@ -52,13 +37,8 @@ export const programmeRoutes = [
     access: 'programmes.write',
     summary: 'Start a programme',
     body: programmeInputSchema,
-    async handler({ body, user, transaction, audit }) {
-      if (await Programme.findOne({ where: { codePrefix: body.codePrefix }, transaction })) {
-        throw conflict(`Code prefix ${body.codePrefix} is taken by another programme`, { field: 'codePrefix' });
-      }
-      const programme = await Programme.create({ ...body, notes: body.notes ?? null, createdBy: user!.id }, { transaction });
-      await audit({ action: 'programme.created', entityType: 'programme', entityId: programme.id, details: { name: programme.name } });
-      return { status: 201, body: { programme: presentProgramme(programme) } };
+    async handler(ctx) {
+      return { status: 201, body: { programme: presentProgramme(await createProgramme(ctx, ctx.body)) } };
     },
   }),
   route({
@@ -68,13 +48,8 @@ export const programmeRoutes = [
     summary: 'Rename a programme, change its goal or notes',
     params: idParamSchema,
     body: programmeUpdateSchema,
-    async handler({ params, body, transaction, audit }) {
-      const programme = await requireProgramme(params.id, transaction, 'param', true);
-      programme.set(body);
-      const changed = programme.changed() || [];
-      await programme.save({ transaction });
-      await audit({ action: 'programme.updated', entityType: 'programme', entityId: programme.id, details: { changed } });
-      return { body: { programme: presentProgramme(programme) } };
+    async handler(ctx) {
+      return { body: { programme: presentProgramme(await updateProgramme(ctx, ctx.params.id, ctx.body)) } };
     },
   }),
   route({
@@ -83,14 +58,8 @@ export const programmeRoutes = [
     access: 'programmes.write',
     summary: 'Archive a programme (its records stay)',
     params: idParamSchema,
-    async handler({ params, transaction, audit }) {
-      const programme = await requireProgramme(params.id, transaction, 'param', true);
-      if (!programme.archivedAt) {
-        programme.archivedAt = new Date();
-        await programme.save({ transaction });
-        await audit({ action: 'programme.archived', entityType: 'programme', entityId: programme.id });
-      }
-      return { body: { programme: presentProgramme(programme) } };
+    async handler(ctx) {
+      return { body: { programme: presentProgramme(await archiveProgramme(ctx, ctx.params.id)) } };
     },
   }),
 ];

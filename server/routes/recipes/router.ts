@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { recipeInputSchema, recipeListQuerySchema } from '../../../shared/schemas/recipes';
 import { route } from '../../http/route';
+import { presentPage } from '../../presenters/page';
 import { presentRecipe } from '../../presenters/recipe';
 import { createRecipe, listRecipes, loadRecipe, observationCounts, setRecipeArchived, updateRecipe } from '../../services/recipes';
 
@@ -15,7 +16,7 @@ export const recipeRoutes = [
     async handler({ query }) {
       const { rows, count } = await listRecipes(query);
       const counts = await observationCounts(rows.map((r) => r.id));
-      return { body: { items: rows.map((r) => presentRecipe(r, { observationCount: counts.get(r.id) ?? 0 })), total: count, page: query.page, pageSize: query.pageSize } };
+      return { body: presentPage(query, rows.map((r) => presentRecipe(r, { observationCount: counts.get(r.id) ?? 0 })), count) };
     },
   }),
   route({

@@ -2,11 +2,8 @@ import { signInSchema } from '../../../shared/schemas/auth';
 import { route } from '../../http/route';
 import { clearSessionCookie, setSessionCookie, signSession } from '../../http/session-cookie';
 import { HttpError } from '../../errors';
-import { User } from '../../models';
 import { presentUser } from '../../presenters/user';
-import { passwordMatches } from '../../services/passwords';
-import { recordAudit } from '../../services/audit';
-import { signOut } from '../../services/sessions';
+import { signIn, signOut } from '../../services/sessions';
 
 const WRONG = () => new HttpError(401, 'sign_in_failed', 'E-mail or password is wrong');
 
@@ -21,23 +18,9 @@ export const sessionRoutes = [
     // The failed-sign-in audit event must survive the refusal, so no surrounding transaction.
     transactional: false,
     async handler({ body, deps, req, res, ip }) {
-      const user = await User.findOne({ where: { email: body.email } });
-      const ok = await passwordMatches(body.password, user?.passwordHash ?? null, deps.config.BCRYPT_COST);
-      if (!user || !ok || !user.active) {
-        await recordAudit({
-          actorId: null,
-          action: 'session.sign_in_failed',
-          entityType: 'user',
-          entityId: user?.id ?? null,
-          details: { email: body.email, reason: !user ? 'unknown e-mail' : !ok ? 'wrong password' : 'inactive' },
-          ip,
-        });
-        // Known and unknown e-mails, wrong passwords and inactive accounts get the same answer.
-        throw WRONG();
-      }
-      user.lastSignInAt = new Date();
-      await user.save();
-      await recordAudit({ actorId: user.id, action: 'session.signed_in', entityType: 'user', entityId: user.id, ip });
+      const user = await signIn(body, ip, deps.config.BCRYPT_COST);
+      // Known and unknown e-mails, wrong passwords and inactive accounts get the same answer.
+      if (!user) throw WRONG();
       setSessionCookie(deps.config, req, res, signSession(deps.config, user));
       return { status: 201, body: { user: presentUser(user) } };
     },

@@ -1,10 +1,9 @@
-import { Op } from 'sequelize';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { shortlistDecisionSchema, shortlistInputSchema, shortlistListQuerySchema, shortlistReturnSchema } from '../../../shared/schemas/shortlists';
 import { route } from '../../http/route';
-import { Shortlist, ShortlistItem, User } from '../../models';
+import { presentPage } from '../../presenters/page';
 import { presentShortlist } from '../../presenters/shortlist';
-import { archiveShortlist, createShortlist, loadShortlist, transitionShortlist, updateShortlist } from '../../services/shortlists';
+import { archiveShortlist, createShortlist, listShortlists, loadShortlist, transitionShortlist, updateShortlist } from '../../services/shortlists';
 
 export const shortlistRoutes = [
   route({
@@ -14,26 +13,9 @@ export const shortlistRoutes = [
     summary: 'Shortlists by programme and status',
     query: shortlistListQuerySchema,
     async handler({ query }) {
-      const where: Record<string, unknown> = { archivedAt: null };
-      if (query.programme) where.programmeId = query.programme;
-      if (query.status) where.status = query.status;
-      const { rows, count } = await Shortlist.findAndCountAll({
-        where,
-        include: [
-          { model: User, as: 'author', attributes: ['id', 'name'] },
-          { model: User, as: 'reviewer', attributes: ['id', 'name'] },
-        ],
-        order: [['updatedAt', 'DESC']],
-        limit: query.pageSize,
-        offset: (query.page - 1) * query.pageSize,
-        distinct: true,
-      });
-      const itemCounts = rows.length
-        ? await ShortlistItem.count({ where: { shortlistId: { [Op.in]: rows.map((r) => r.id) } }, group: ['shortlistId'] })
-        : [];
-      const countById = new Map((itemCounts as unknown as { shortlistId: number; count: number }[]).map((c) => [c.shortlistId, Number(c.count)]));
-      const items = rows.map((s) => ({ ...presentShortlist(s), itemCount: countById.get(s.id) ?? 0 }));
-      return { body: { items, total: count, page: query.page, pageSize: query.pageSize } };
+      const { rows, count, itemCounts } = await listShortlists(query);
+      const items = rows.map((s) => ({ ...presentShortlist(s), itemCount: itemCounts.get(s.id) ?? 0 }));
+      return { body: presentPage(query, items, count) };
     },
   }),
   route({

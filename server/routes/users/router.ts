@@ -1,9 +1,9 @@
 import { idParamSchema, pageQuerySchema } from '../../../shared/schemas/common';
 import { updateUserSchema } from '../../../shared/schemas/team';
 import { route } from '../../http/route';
-import { User } from '../../models';
+import { presentPage } from '../../presenters/page';
 import { presentUser } from '../../presenters/user';
-import { updateUser } from '../../services/team';
+import { listUsers, updateUser } from '../../services/team';
 
 export const userRoutes = [
   route({
@@ -13,12 +13,8 @@ export const userRoutes = [
     summary: 'Everyone in the installation',
     query: pageQuerySchema,
     async handler({ query }) {
-      const { rows, count } = await User.findAndCountAll({
-        order: [['name', 'ASC']],
-        limit: query.pageSize,
-        offset: (query.page - 1) * query.pageSize,
-      });
-      return { body: { items: rows.map(presentUser), total: count, page: query.page, pageSize: query.pageSize } };
+      const { rows, count } = await listUsers(query);
+      return { body: presentPage(query, rows.map(presentUser), count) };
     },
   }),
   route({
