@@ -2,6 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { seriousAccessibilityViolations } from '../support/axe';
 import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';
 import { withBrowserStack } from '../support/browser-suite';
+import { seededRandom } from '../../shared/seeded-random';
 import { buildUser, signedInAgent, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput } from '../support/team-builders';
 
@@ -12,6 +13,8 @@ import { buildLibrary, buildProgramme, recipeInput } from '../support/team-build
 const suite = withBrowserStack();
 let formulator: TestUser;
 let code: string;
+let programmeId: number;
+let agedProgrammeId: number;
 
 beforeAll(async () => {
   const lib = await buildLibrary();
@@ -20,6 +23,7 @@ beforeAll(async () => {
   const created = await (await signedInAgent(suite.stack.app, formulator)).post('/api/recipes').send(recipeInput(programme, lib, { name: 'Weak primer gel' }));
   expect(created.status).toBe(201);
   code = created.body.recipe.code;
+  programmeId = programme.id;
   const scientist = await signedInAgent(suite.stack.app, await buildUser({ role: 'scientist' }));
   // G′ of the gel checks rises with age: 100, 110, 130, 150 Pa at 7, 7, 14, 28 days.
   const checks: Array<[string, number, string, number | null]> = [
@@ -31,7 +35,26 @@ beforeAll(async () => {
     const response = await scientist.post('/api/observations').send({ recipeId: created.body.recipe.id, mixedAt, ageDays, observedState, method: 'rheology', ...(storageModulusPa === null ? {} : { storageModulusPa }) });
     expect(response.status).toBe(201);
   }
-});
+  // A second, invented programme with enough collapses for the model: eight recipes of rising
+  // polymer dose, four samples each, the collapse hazard falling with the dose.
+  const aged = await buildProgramme({ name: 'Aged primer series', goalState: 'gel', attractionSource: 'depletion' });
+  agedProgrammeId = aged.id;
+  const formulatorAgent = await signedInAgent(suite.stack.app, formulator);
+  const random = seededRandom(1414);
+  for (let i = 0; i < 8; i++) {
+    const recipe = await formulatorAgent.post('/api/recipes').send(recipeInput(aged, lib, { fraction: { kind: 'volume', value: 0.12 + 0.01 * i }, attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 6 + 1.5 * i } }));
+    expect(recipe.status).toBe(201);
+    for (let s = 0; s < 4; s++) {
+      const collapseDay = 3 + Math.ceil(-Math.log(1 - random()) * 8 * (1 + i / 2));
+      const lastCheck = 20 + Math.floor(random() * 40);
+      const end = Math.min(collapseDay, lastCheck);
+      for (const [ageDays, observedState] of [[2, 'gel'], [end, collapseDay <= lastCheck ? 'collapsed' : 'gel']] as const) {
+        const check = await scientist.post('/api/observations').send({ recipeId: recipe.body.recipe.id, mixedAt: `2026-0${1 + s}-1${i}`, ageDays, observedState, method: 'visual' });
+        expect(check.status).toBe(201);
+      }
+    }
+  }
+}, 120_000);
 
 describe('shelf life on the recipe page', () => {
   it('shows how long the recipe\'s gels lasted on the bench: the survival curve with its band and the median in words', async () => {
@@ -57,6 +80,27 @@ describe('shelf life on the recipe page', () => {
     expect(await page.getByTestId('line-sources').textContent()).toContain('mode-coupling');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
     await screenshot(page, 'recipe-shelf-life');
+    expect(unexpected()).toEqual([]);
+    await context.close();
+  });
+
+  it('colours the state map by predicted median days to collapse when the shelf-life layer is on, and says why it is off when the model is refused', async () => {
+    const { page, context, unexpected } = await openCheckedPage(suite.browser);
+    await signInThroughForm(page, suite.stack.url, formulator.email, formulator.password);
+    await page.goto(`${suite.stack.url}/map?programme=${agedProgrammeId}`);
+    await page.getByLabel('Predicted median days to collapse').check();
+    await page.waitForURL(/shelf=median/);
+    const key = page.getByTestId('shelf-life-key');
+    await key.waitFor();
+    expect(await key.textContent()).toMatch(/Predicted median days to collapse.*too thin.*Cox model/);
+    expect(await page.getByTestId('shelf-life-layer').locator('rect').count()).toBeGreaterThan(100);
+    await screenshot(page, 'map-shelf-life-layer');
+    // The first programme has two collapses: the layer is off and says why.
+    await page.goto(`${suite.stack.url}/map?programme=${programmeId}&shelf=median`);
+    await page.getByTestId('shelf-life-key').waitFor();
+    expect(await page.getByTestId('shelf-life-key').textContent()).toBe('Shelf-life layer off: 2 collapses seen; at least 10 are needed.');
+    expect(await page.getByTestId('shelf-life-layer').count()).toBe(0);
+    expect(await seriousAccessibilityViolations(page)).toEqual([]);
     expect(unexpected()).toEqual([]);
     await context.close();
   });

@@ -27,6 +27,9 @@ import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
 import { formatDate } from '@/lib/format';
 import { useUrlParams } from '@/lib/use-url-params';
 import { decodeMapRecipes } from '@shared/views/map-points';
+import { ShelfLifeKey, ShelfLifeOverlay } from '@/features/map/components/shelf-life-overlay';
+import { shelfLifeLayer, type ShelfLifeLayer } from '@/features/map/geometry/shelf-life-layer';
+import { useProgrammeShelfLife } from '@/features/shelf-life';
 
 function median(values: number[]) {
   if (values.length === 0) return null;
@@ -130,6 +133,15 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
     [setParams, depletion],
   );
   const onOpen = useCallback((p: MapPoint) => p.code && navigate(`/recipes/${p.code}`), [navigate]);
+  // The shelf-life layer: the programme's Cox model across φ and attraction, read only when asked for.
+  const shelfLife = useProgrammeShelfLife(programme.id, null, view.shelfLife);
+  const shelfLayer = useMemo<ShelfLifeLayer | null>(() => {
+    if (!view.shelfLife || !shelfLife.data || !built.map || !drawing) return null;
+    const sampled = new Set(shelfLife.data.recipes.map((r) => r.recipeId));
+    const samplePoints = placed.points.filter((p) => p.kind === 'recipe' && sampled.has(p.id)).map((p): [number, number] => [p.x, p.y]);
+    return shelfLifeLayer(shelfLife.data.drivers, { model: built.map.model, sign: built.map.y.inverted ? -1 : 1, xDomain: drawing.xDomain, yDomain: drawing.yDomain }, samplePoints);
+  }, [view.shelfLife, shelfLife.data, built.map, drawing, placed.points]);
+  const decorations = useCallback((scales: Parameters<typeof ShelfLifeOverlay>[0]['scales']) => (shelfLayer ? <ShelfLifeOverlay layer={shelfLayer} scales={scales} /> : null), [shelfLayer]);
 
   if (!built.map || !drawing) return <Notice tone="error" title="The map could not be computed">{built.error?.message}</Notice>;
   const recipes = placed.points.filter((p) => p.kind === 'recipe').length;
@@ -165,6 +177,7 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
             onOpen={onOpen}
             svgRef={setSvgElement}
             canvasRef={canvasRef}
+            decorations={view.shelfLife ? decorations : undefined}
             ariaLabel={`State map of ${programme.name}: ${drawing.modelLabel}; ${recipes} recipes and ${observations} observations, ${mismatches} differing from the prediction`}
           />
           <p className="mt-3 text-xs text-ink-soft" data-testid="map-model-note">
@@ -177,6 +190,17 @@ function MapScreen({ programme, data, canShortlist, calibration }: { programme: 
         <div className="flex flex-col gap-5">
           <Card title="Layers and key">
             <MapLegend layers={view.layers} onToggle={toggle} available={LAYERS.filter((l) => l !== 'calibrated' || calibration !== null)} />
+          </Card>
+          <Card title="Shelf life">
+            <label className="flex cursor-pointer items-center gap-2 text-sm">
+              <input type="checkbox" checked={view.shelfLife} onChange={() => setView((current) => ({ shelfLife: !current.shelfLife }))} className="h-4 w-4 accent-fjord-500" />
+              Predicted median days to collapse
+            </label>
+            {view.shelfLife && (
+              <div className="mt-3">
+                {shelfLife.isError ? <ErrorState error={shelfLife.error} retry={() => shelfLife.refetch()} /> : <ShelfLifeKey layer={shelfLayer} loading={shelfLife.isPending} />}
+              </div>
+            )}
           </Card>
           <Card title="Selection">
             <SelectionPanel points={selected} programmeId={programme.id} goalState={programme.goalState} canShortlist={canShortlist} onClear={() => setSelected([])} />

@@ -18,6 +18,8 @@ export interface MapView {
   maxAge: number | null;
   /** The glass line rescaled onto the observed hard-sphere φ_g (default) or as MCT computes it. */
   glassLine: GlassLineMapping;
+  /** The shelf-life layer (predicted median days to collapse) is shown: `shelf=median` in the address. */
+  shelfLife: boolean;
 }
 
 export const DEFAULT_LAYERS: Layer[] = ['regions', 'lines', 'recipes', 'observations', 'mismatches', 'labels', 'calibrated'];
@@ -49,6 +51,7 @@ export function parseMapView(params: URLSearchParams, defaultAxis: AxisChoice): 
     minAge: optionalNumber(params.get('minAge')),
     maxAge: optionalNumber(params.get('maxAge')),
     glassLine: params.get('glass') === 'computed' ? 'computed' : 'rescaled',
+    shelfLife: params.get('shelf') === 'median',
   };
 }
 
@@ -66,6 +69,8 @@ export function writeMapView(params: URLSearchParams, view: MapView): URLSearchP
   else next.delete('calibrated');
   if (view.glassLine === 'computed') next.set('glass', 'computed');
   else next.delete('glass');
+  if (view.shelfLife) next.set('shelf', 'median');
+  else next.delete('shelf');
   for (const key of ['minAge', 'maxAge'] as const) {
     if (view[key] === null) next.delete(key);
     else next.set(key, String(view[key]));
