@@ -5,19 +5,22 @@ import type { Transaction } from 'sequelize';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import type { ObservationMethod, ObservedState, PredictedState } from '../../shared/states';
 import type { Config } from '../config';
-import { Attachment, Depletant, Observation, ParticleSystem, Programme, Recipe, Salt, Shortlist, ShortlistEvent, ShortlistItem, Solvent, type User } from '../models';
+import { Attachment, CheckSchedule, Depletant, Observation, ParticleSystem, Programme, Recipe, Salt, Shortlist, ShortlistEvent, ShortlistItem, Solvent, type User } from '../models';
 import { attractionColumns } from '../presenters/recipe';
 import { recordAudit } from '../services/audit';
 import { deriveForRecipe, recipeMaterials } from '../services/predictions';
 import { deriveRecipe, recipeStateMap } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 import { demoMicrograph } from './micrograph';
+import { DEMO_CHECK_AGES, demoAgeingSamples } from './demo-ageing';
 
 /**
  * The invented scenario of Halden Brook Materials: a depletion-gel primer programme and a
  * salt-driven slurry programme, a library of plausible materials, recipes spread over the
  * map, bench observations at several ages (mostly agreeing with the predictions, sometimes
- * not, weak gels collapsing with time), two generated micrographs, shortlists in every status.
+ * not, weak gels collapsing with time), several ageing samples of every gel with checks from 1 to
+ * 56 days and a few check schedules (demo-ageing.ts), two generated micrographs, shortlists in
+ * every status.
  * Material values are typical handbook-order numbers chosen for the demo; they are not data.
  */
 export async function seedDemoScenario(config: Config, people: Record<string, User>, transaction: Transaction) {
@@ -160,6 +163,39 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
     }
   }
 
+  // Ageing on the shelf: several samples of every recipe that gels in the team's reality, checked
+  // at 1–56 days, some collapsing; a few recipes carry a check schedule and a sample mixed lately
+  // whose next check has come, so the bench log's due list has work in it.
+  const today = new Date();
+  const daysBefore = (days: number) => new Date(Date.UTC(today.getUTCFullYear(), today.getUTCMonth(), today.getUTCDate() - days));
+  const gels = recipes.filter((r) => reality.get(r.id)!.state === 'gel' && r.derived.contactEnergyKT !== null);
+  const scheduled = new Map<number, number>();
+  const recentDays = [9, 16, 30, 5, 12, 20];
+  for (const programme of [primer, slurry]) {
+    for (const recipe of gels.filter((r) => r.programmeId === programme.id).slice(0, 3)) scheduled.set(recipe.id, recentDays[scheduled.size]);
+  }
+  const ageingRows = [];
+  for (const recipe of gels) {
+    const samples = demoAgeingSamples({ phi: recipe.phi, contactEnergyKT: recipe.derived.contactEnergyKT!, softens: recipe.particleId === latex.id }, random, scheduled.get(recipe.id));
+    for (const sample of samples) {
+      const observerId = random() < 0.6 ? people.scientist.id : people.scientist2.id;
+      for (const check of sample.checks) {
+        const collapsed = check.state === 'collapsed';
+        ageingRows.push({
+          programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null,
+          mixedAt: daysBefore(sample.mixedDaysAgo), ageDays: check.ageDays, observedState: check.state,
+          method: (check.storageModulusPa !== null ? 'rheology' : 'visual') as ObservationMethod,
+          storageModulusPa: check.storageModulusPa, yieldStressPa: null,
+          settledHeightPct: collapsed ? Math.round(40 + random() * 35) : null,
+          notes: collapsed ? 'Clear supernatant on top; network compacted.' : null,
+          observerId, importBatchId: null,
+        });
+      }
+    }
+  }
+  const aged = await Observation.bulkCreate(ageingRows, t);
+  for (const recipeId of scheduled.keys()) await CheckSchedule.create({ recipeId, agesDays: [...DEMO_CHECK_AGES], updatedBy: people.scientist.id }, t);
+
   // Two generated micrographs, stored like uploads.
   const dir = resolve(config.DATA_DIR, 'attachments');
   for (const [kind, state] of [['gel', 'gel'], ['fluid', 'fluid']] as const) {
@@ -205,6 +241,6 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
   ]);
   await addShortlist('Ideas for the next batch', 'Work in progress.', pick(1, 2), [{ to: 'draft', actor: people.formulator }]);
 
-  await recordAudit({ actorId: null, action: 'demo.seeded', entityType: 'installation', entityId: null, details: { recipes: recipes.length, observations: observations.length } }, transaction);
-  return { recipes: recipes.length, observations: observations.length };
+  await recordAudit({ actorId: null, action: 'demo.seeded', entityType: 'installation', entityId: null, details: { recipes: recipes.length, observations: observations.length + aged.length } }, transaction);
+  return { recipes: recipes.length, observations: observations.length + aged.length, checkSchedules: scheduled.size };
 }
