@@ -1,11 +1,11 @@
 import { Op, type Transaction } from 'sequelize';
-import { CalibrationRefused, type CalibrationObservation } from '../../shared/calibration';
+import { CalibrationRefused } from '../../shared/calibration';
+import { observationColumns, type BenchForFit, type ObservationRowForFit } from '../../shared/calibration/bench-for-fit';
 import type { CalibrationFit } from '../../shared/calibration/types';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
-import { PHYSICS_MODEL_VERSION, PhysicsArgumentError, type StateMap } from '../../shared/physics';
+import { PHYSICS_MODEL_VERSION, PhysicsArgumentError } from '../../shared/physics';
 import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
-import { cachedStateMap } from '../../shared/state-map-cache';
 import type { PredictionRecompute } from '../../shared/views/calibration';
 import { conflict, HttpError, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
@@ -61,46 +61,46 @@ async function materialsOf(recipes: Recipe[], transaction: Transaction | null): 
   );
 }
 
+/** Observation rows read per query when gathering the bench for a fit: a few ms of request-thread work each. */
+const FIT_READ_PAGE_ROWS = 5000;
+
 /**
- * The programme's live bench observations as the fit reads them: φ and B2* from the recipe's
- * stored derivation (or the ad-hoc composition), on the uncalibrated map the recipe is
- * predicted on (recipeStateMap) or, for ad-hoc compositions, the generic mean-field B2* map.
+ * The programme's live bench as a fit needs it: the live recipes (composition, plain library rows,
+ * stored φ and B2*) and the live observations as columns, read by keyset in pages so a large bench
+ * never holds the request thread for long. The maps are built by calibrationObservationsOf in the
+ * fit's worker thread.
  */
-export async function calibrationObservations(programmeId: number, transaction: Transaction | null): Promise<CalibrationObservation[]> {
+export async function benchForFit(programmeId: number, transaction: Transaction | null): Promise<BenchForFit> {
   const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, transaction });
   const materials = await materialsOf(recipes, transaction);
-  const recipeById = new Map(recipes.map((r) => [r.id, r]));
-  const maps = new Map<number, StateMap | null>();
-  for (const recipe of recipes) {
-    const m = materials.get(recipe.id);
-    let map: StateMap | null = null;
-    try {
-      map = m ? recipeStateMap(recipeInputOf(recipe), m) : null;
-    } catch (error) {
-      if (!(error instanceof PhysicsArgumentError)) throw error;
-    }
-    maps.set(recipe.id, map);
+  const plain = <T extends object>(row: T | null | undefined) => (row ? ((row as unknown as { get(o: { plain: true }): T }).get({ plain: true })) : null);
+  const rows: ObservationRowForFit[] = [];
+  for (let lastId = 0; ; ) {
+    const page = (await Observation.findAll({
+      where: { programmeId, archivedAt: null, id: { [Op.gt]: lastId } },
+      attributes: ['id', 'recipeId', 'adhocPhi', 'adhocReducedB2', 'observedState'],
+      order: [['id', 'ASC']],
+      limit: FIT_READ_PAGE_ROWS,
+      transaction,
+      raw: true,
+    })) as unknown as ObservationRowForFit[];
+    for (const row of page) rows.push(row);
+    if (page.length < FIT_READ_PAGE_ROWS) break;
+    lastId = page[page.length - 1].id;
   }
-  const adhocMap = cachedStateMap({ kind: 'generic', theory: 'meanField', axis: 'b2' });
-  // Plain rows: a programme may hold tens of thousands, and model instances cost CPU on the request thread.
-  const observations = (await Observation.findAll({
-    where: { programmeId, archivedAt: null },
-    attributes: ['id', 'recipeId', 'adhocPhi', 'adhocReducedB2', 'observedState'],
-    order: [['id', 'ASC']],
-    transaction,
-    raw: true,
-  })) as unknown as Pick<Observation, 'id' | 'recipeId' | 'adhocPhi' | 'adhocReducedB2' | 'observedState'>[];
-  const offered: CalibrationObservation[] = [];
-  for (const o of observations) {
-    if (o.recipeId === null) {
-      offered.push({ id: o.id, phi: o.adhocPhi, reducedB2: o.adhocReducedB2, observedState: o.observedState, map: adhocMap });
-      continue;
-    }
-    const recipe = recipeById.get(o.recipeId);
-    if (!recipe) continue; // an archived recipe's observations are not offered
-    offered.push({ id: o.id, phi: recipe.derived.phi, reducedB2: recipe.derived.reducedB2, observedState: o.observedState, map: maps.get(recipe.id) ?? null });
-  }
-  return offered;
+  return {
+    recipes: recipes.map((recipe) => {
+      const m = materials.get(recipe.id);
+      return {
+        id: recipe.id,
+        input: recipeInputOf(recipe),
+        materials: m ? { particle: plain(m.particle)!, solvent: plain(m.solvent)!, depletant: plain(m.depletant), salt: plain(m.salt) } : null,
+        phi: recipe.derived.phi,
+        reducedB2: recipe.derived.reducedB2,
+      };
+    }),
+    observations: observationColumns(rows),
+  };
 }
 
 /** The 422 a refused fit answers with: what is missing, and the counts. */
@@ -117,13 +117,13 @@ function refusal(error: CalibrationRefused) {
 export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, input: CalibrationFitInput) {
   const programme = await requireProgramme(programmeId, null, 'param');
   if (programme.archivedAt) throw conflict('The programme is archived; restore it before calibrating');
-  const observations = await calibrationObservations(programmeId, null);
+  const bench = await benchForFit(programmeId, null);
   const { HEAVY_JOBS_PER_USER, HEAVY_JOB_SECONDS } = ctx.deps.config;
   let result: CalibrationFit;
   try {
     // In a worker thread: a fit on tens of thousands of observations takes seconds of CPU.
     result = await withHeavyJobSlot(ctx.user!.id, HEAVY_JOBS_PER_USER, () =>
-      runInWorker<CalibrationFit>('calibrationFit', { observations, options: { parameters: input.parameters, folds: input.folds } }, HEAVY_JOB_SECONDS * 1000),
+      runInWorker<CalibrationFit>('calibrationFit', { bench, options: { parameters: input.parameters, folds: input.folds } }, HEAVY_JOB_SECONDS * 1000),
     );
   } catch (error) {
     if (error instanceof HeavyJobFailed && error.refused) throw refusal(new CalibrationRefused(error.refused.reason as CalibrationRefused['reason'], error.message, error.refused.counts as Record<string, number>));
@@ -185,8 +185,7 @@ export async function recomputePredictions(transaction: Transaction, programmeId
     if (!m) throw conflict(`Recipe ${recipe.code} refers to a material that no longer exists; nothing was changed`);
     let derived;
     try {
-      const input = recipeInputOf(recipe);
-      derived = deriveRecipe(input, m, { parameters, map: recipeStateMap(input, m, parameters), calibration });
+      derived = deriveRecipe(recipeInputOf(recipe), m, { parameters, calibration }).derived;
     } catch (error) {
       if (error instanceof PhysicsArgumentError) throw conflict(`Recipe ${recipe.code} could not be derived again (${error.message}); nothing was changed`);
       throw error;

@@ -1,6 +1,7 @@
 import { setPriority } from 'node:os';
 import { parentPort } from 'node:worker_threads';
-import { CalibrationRefused, fitCalibration, type CalibrationObservation, type CalibrationOptions } from '../../shared/calibration';
+import { CalibrationRefused, fitCalibration, type CalibrationOptions } from '../../shared/calibration';
+import { calibrationObservationsOf, type BenchForFit } from '../../shared/calibration/bench-for-fit';
 import { programmeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-compute';
 
@@ -9,7 +10,7 @@ import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-co
  * so a long fit never blocks other requests. Each answers { ok, value } or { ok: false, error }.
  */
 const JOBS = {
-  calibrationFit: (input: { observations: CalibrationObservation[]; options: CalibrationOptions }) => fitCalibration(input.observations, input.options),
+  calibrationFit: (input: { bench: BenchForFit; options: CalibrationOptions }) => fitCalibration(calibrationObservationsOf(input.bench), input.options),
   plan: (input: PlanJob) => computePlan(input),
   shelfLife: (input: { recipes: ShelfLifeRecipeInput[]; samples: ShelfLifeSampleInput[]; focusRecipeId?: number }) =>
     programmeShelfLife(input.recipes, input.samples, { focusRecipeId: input.focusRecipeId }),
