@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import { describeSurvival } from '@shared/shelf-life/describe-survival';
+import { gelModuliFromChecks } from '@shared/shelf-life/gel-moduli-from-checks';
 import { kaplanMeier } from '@shared/shelf-life/kaplan-meier';
 import { MIN_STIFFENING_AGES, stiffeningWithAge } from '@shared/shelf-life/stiffening-with-age';
 import { survivalRecordsFromChecks, type SampleCheck } from '@shared/shelf-life/survival-records-from-checks';
@@ -14,7 +15,7 @@ import { SurvivalCurveChart } from './survival-curve';
 export function BenchSurvival({ checks }: { checks: Array<SampleCheck & { storageModulusPa: number | null }> | null }) {
   const curve = useMemo(() => (checks ? kaplanMeier(survivalRecordsFromChecks(checks)) : null), [checks]);
   const stiffening = useMemo(
-    () => (checks ? stiffeningWithAge(checks.filter((c) => c.storageModulusPa !== null && c.ageDays > 0 && c.observedState === 'gel').map((c) => ({ ageDays: c.ageDays, storageModulusPa: c.storageModulusPa! }))) : null),
+    () => (checks ? stiffeningWithAge(gelModuliFromChecks(checks)) : null),
     [checks],
   );
   if (curve === null) return <p className="text-ink-soft">Loading the bench checks…</p>;
