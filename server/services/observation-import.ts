@@ -1,11 +1,11 @@
 import { randomUUID } from 'node:crypto';
-import { parse } from 'csv-parse/sync';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS, observationFields } from '../../shared/schemas/observations';
 import type { ImportReport, ImportRowProblem } from '../../shared/views/team-data';
 import type { HandlerContext } from '../http/route';
 import { ImportBatch, Observation, Programme, Recipe } from '../models';
-import { unescapeCell } from './csv-cells';
+import { runInWorker } from './heavy-jobs';
+import type { ImportCsv } from './import-csv-records';
 import { idempotencyKeyOf, keyReused, sha256 } from './idempotency';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -25,35 +25,22 @@ interface ParsedRow {
 
 const NUMERIC = { age_days: 'ageDays', storage_modulus_pa: 'storageModulusPa', yield_stress_pa: 'yieldStressPa', settled_height_pct: 'settledHeightPct' } as const;
 
-/** Reads the CSV text into records keyed by header; a malformed file is one problem on row 1. */
-function readCsv(text: string): { header: string[]; records: Record<string, string>[] } | ImportRowProblem {
-  try {
-    const rows = parse(text, { bom: true, skip_empty_lines: true, relax_column_count: false, trim: true }) as string[][];
-    if (rows.length === 0) return { row: 1, column: '', message: 'The file is empty' };
-    const header = rows[0].map((h) => h.trim().toLowerCase());
-    const records = rows.slice(1).map((cells) => Object.fromEntries(header.map((h, i) => [h, unescapeCell(cells[i] ?? '')])));
-    return { header, records };
-  } catch (error) {
-    const e = error as { lines?: number; message?: string };
-    return { row: e.lines ?? 1, column: '', message: `The file is not valid CSV: ${(e.message ?? '').replace(/^.*?: /, '').slice(0, 160)}` };
-  }
-}
-
 /**
  * Validates every row before anything is written: the header, each cell, and that each
  * recipe code names a live recipe. Row numbers count the header as row 1, like a spreadsheet.
  */
-export async function validateImport(text: string, transaction: Transaction | null): Promise<{ report: ImportReport; rows: ParsedRow[] }> {
-  const read = readCsv(text);
+export async function validateImport(text: string, transaction: Transaction | null, timeoutMs: number): Promise<{ report: ImportReport; rows: ParsedRow[] }> {
+  // Parsed in a worker thread: a file near the upload cap is about a second of CPU.
+  const read = await runInWorker<ImportCsv>('importCsv', text, timeoutMs);
   if ('row' in read) return { report: { ok: false, rows: 0, imported: 0, problems: [read] }, rows: [] };
   const problems: ImportRowProblem[] = [];
   const missing = REQUIRED_IMPORT_COLUMNS.filter((c) => !read.header.includes(c));
   for (const column of missing) problems.push({ row: 1, column, message: `The header lacks the column ${column}` });
   const unknown = read.header.filter((h) => !(IMPORT_COLUMNS as readonly string[]).includes(h));
   for (const column of unknown) problems.push({ row: 1, column, message: `Unknown column ${column}; expected ${IMPORT_COLUMNS.join(', ')}` });
-  if (read.records.length === 0) problems.push({ row: 1, column: '', message: 'The file has a header but no rows' });
-  if (read.records.length > IMPORT_MAX_ROWS) problems.push({ row: IMPORT_MAX_ROWS + 2, column: '', message: `At most ${IMPORT_MAX_ROWS} rows per import` });
-  if (problems.length) return { report: { ok: false, rows: read.records.length, imported: 0, problems }, rows: [] };
+  if (read.recordCount === 0) problems.push({ row: 1, column: '', message: 'The file has a header but no rows' });
+  if (read.recordCount > IMPORT_MAX_ROWS) problems.push({ row: IMPORT_MAX_ROWS + 2, column: '', message: `At most ${IMPORT_MAX_ROWS} rows per import` });
+  if (problems.length) return { report: { ok: false, rows: read.recordCount, imported: 0, problems }, rows: [] };
 
   const codes = [...new Set(read.records.map((r) => r.recipe_code).filter(Boolean))];
   const recipes = (await Recipe.findAll({
@@ -131,7 +118,7 @@ export async function importObservations(ctx: Ctx, input: { text: string; fileNa
     const earlier = await ImportBatch.findOne({ where: { userId, idempotencyKey }, transaction });
     if (earlier) return replay(earlier);
   }
-  const { report, rows } = await validateImport(input.text, transaction);
+  const { report, rows } = await validateImport(input.text, transaction, ctx.deps.config.HEAVY_JOB_SECONDS * 1000);
   if (!report.ok) return { status: 422, report };
   if (input.dryRun) return { status: 200, report: { ...report, imported: 0 } };
 

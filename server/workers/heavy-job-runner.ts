@@ -3,6 +3,7 @@ import { parentPort } from 'node:worker_threads';
 import { CalibrationRefused, fitCalibration, type CalibrationOptions } from '../../shared/calibration';
 import { calibrationObservationsOf, type BenchForFit } from '../../shared/calibration/bench-for-fit';
 import { programmeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
+import { readImportCsv } from '../services/import-csv-records';
 import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-compute';
 
 /**
@@ -12,6 +13,7 @@ import { computePlan, PlanInputProblem, type PlanJob } from '../services/plan-co
 const JOBS = {
   calibrationFit: (input: { bench: BenchForFit; options: CalibrationOptions }) => fitCalibration(calibrationObservationsOf(input.bench), input.options),
   plan: (input: PlanJob) => computePlan(input),
+  importCsv: (text: string) => readImportCsv(text),
   shelfLife: (input: { recipes: ShelfLifeRecipeInput[]; samples: ShelfLifeSampleInput[]; focusRecipeId?: number }) =>
     programmeShelfLife(input.recipes, input.samples, { focusRecipeId: input.focusRecipeId }),
 };

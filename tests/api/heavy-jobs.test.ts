@@ -3,6 +3,7 @@ import { parse } from 'csv-parse/sync';
 import request from 'supertest';
 import { Calibration, Observation, Plan, type Programme } from '../../server/models';
 import { EXPORT_PAGE_ROWS } from '../../server/services/observation-export';
+import { IMPORT_COLUMNS, IMPORT_MAX_ROWS } from '../../shared/schemas/observations';
 import { buildUser, type TestUser } from '../support/builders';
 import { buildLibrary, buildProgramme } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';
@@ -90,6 +91,31 @@ describe('planner runs in a worker thread', () => {
     const patient = await (await agentFor(stack.app, formulator)).post('/api/plans').send(body);
     expect(patient.status).toBe(201);
     expect(patient.body.plan.outcome.counts.sampled).toBe(10_000);
+  });
+});
+
+describe('CSV imports are parsed in a worker thread', () => {
+  /** A bench-log CSV of `rows` rows with the import's own header (invented rows). */
+  const bigCsv = (rows: number) =>
+    Buffer.from([IMPORT_COLUMNS.join(','), ...Array.from({ length: rows }, (_, i) => `NO-SUCH-${i},2026-10-01,${i % 60},gel,visual,120,3,95,"a note, with a comma"`)].join('\n'));
+
+  it('a file longer than the row cap is refused with the cap named, after parsing off the request thread; nothing is stored', async () => {
+    const agent = await agentFor(stack.app, scientist);
+    const before = await Observation.count();
+    const answer = await agent.post('/api/observations/import').attach('file', bigCsv(IMPORT_MAX_ROWS + 50), 'long.csv');
+    expect(answer.status).toBe(422);
+    expect(answer.body.report).toMatchObject({ ok: false, rows: IMPORT_MAX_ROWS + 50, imported: 0 });
+    expect(answer.body.report.problems).toEqual([{ row: IMPORT_MAX_ROWS + 2, column: '', message: `At most ${IMPORT_MAX_ROWS} rows per import` }]);
+    expect(await Observation.count()).toBe(before);
+  });
+
+  it('parsing goes through the heavy-job worker: past HEAVY_JOB_SECONDS the import is stopped with 503 and nothing is stored', async () => {
+    const agent = await agentFor(stack.appWith({ HEAVY_JOB_SECONDS: '0.001' }), scientist);
+    const before = await Observation.count();
+    const answer = await agent.post('/api/observations/import').attach('file', bigCsv(IMPORT_MAX_ROWS), 'slow.csv');
+    expect(answer.status).toBe(503);
+    expect(answer.body.error.id).toBe('job_timed_out');
+    expect(await Observation.count()).toBe(before);
   });
 });
 
