@@ -1,11 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { highestGlassPhi, PhysicsArgumentError, SHORT_RANGE_LIMIT, type StateMap } from './physics';
-import { deriveRecipe, recipeFieldOf, recipeStateMap, type RecipeMaterials } from './recipe-derivation';
+import { deriveRecipe, recipeFieldOf, type RecipeMaterials } from './recipe-derivation';
 import type { RecipeInput } from './schemas/recipes';
+import type { RecipeDerived } from './views/team-data';
 import { PREDICTED_STATES } from './states';
 
 // A property-style sweep over realistic recipes, derived exactly as the server does on save
-// (recipeStateMap, then deriveRecipe; a PhysicsArgumentError becomes a 400 on recipeFieldOf).
+// (deriveRecipe on the recipe's cached map; a PhysicsArgumentError becomes a 400 on recipeFieldOf).
 // The grids are test inputs, not check values: typical ranges of formulation work.
 
 /** ~4 s on an idle machine (about 25 free-volume maps are built); generous for a loaded one. */
@@ -42,8 +43,7 @@ function leaves(value: unknown, path = '', into: Array<[string, unknown]> = []):
 function sweepProblems(recipe: RecipeInput, materials: RecipeMaterials): string[] {
   const label = JSON.stringify({ radiusNm: materials.particle.radiusNm, phi: recipe.fraction.value, attraction: recipe.attraction });
   try {
-    const map = recipeStateMap(recipe, materials);
-    const derived = deriveRecipe(recipe, materials, { map });
+    const { derived, map } = deriveRecipe(recipe, materials);
     const problems = leaves(derived)
       .filter(([, value]) => (typeof value === 'number' && !Number.isFinite(value)) || (typeof value === 'string' && /NaN|Infinity/.test(value)))
       .map(([path, value]) => `${label}: ${path} = ${String(value)}`);
@@ -64,7 +64,7 @@ function sweepProblems(recipe: RecipeInput, materials: RecipeMaterials): string[
  * (arrested spinodal decomposition, Lu et al., Nature 453, 499 (2008)), never a glass; long-range
  * depletion (q > 0.25) has no attractive glass, so no glass below the hard-sphere line.
  */
-function ruleProblems(label: string, derived: ReturnType<typeof deriveRecipe>, map: StateMap): string[] {
+function ruleProblems(label: string, derived: RecipeDerived, map: StateMap): string[] {
   const problems: string[] = [];
   const phi = derived.phi!;
   const glass = map.tables.glass.phi;

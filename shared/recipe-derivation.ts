@@ -1,4 +1,4 @@
-import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters, type StateMap } from './physics';
+import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters, type MapModel, type StateMap } from './physics';
 import { volumeFractionFromMassFraction } from './physics/colloid/volume-fraction-from-mass-fraction';
 import { recipeAttraction } from './physics/recipe/recipe-attraction';
 import { cachedStateMap } from './state-map-cache';
@@ -70,12 +70,16 @@ export function recipeFieldOf(error: PhysicsArgumentError): string {
 }
 
 /**
- * Derives and shapes what a recipe stores. `map` is an optional prebuilt map (the server keeps
- * one per model); `calibration` labels the result when calibrated parameters were used.
+ * Derives and shapes what a recipe stores, classified on the map the recipe is predicted on
+ * (from the shared cache, built with `parameters` and the particle's polydispersity: see
+ * recipeStateMap); returns that map too, for drawing the recipe on it. `calibration` labels the
+ * result when calibrated parameters were used.
  */
-export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, options: { parameters?: Partial<ClassifierParameters>; map?: StateMap; calibration?: { id: number; acceptedAt: string } | null } = {}): RecipeDerived {
-  const d = deriveRecipeParameters(physicsInputFor(recipe, materials, options.parameters), { map: options.map });
-  return {
+export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, options: { parameters?: Partial<ClassifierParameters>; calibration?: { id: number; acceptedAt: string } | null } = {}): { derived: RecipeDerived; map: StateMap } {
+  let map: StateMap | undefined;
+  const mapFor = (model: MapModel) => (map = cachedStateMap(model, mapOptions(materials, options.parameters)));
+  const d = deriveRecipeParameters(physicsInputFor(recipe, materials, options.parameters), { mapFor });
+  const derived: RecipeDerived = {
     modelVersion: d.modelVersion,
     phi: d.phi,
     sizeRatio: d.q,
@@ -98,7 +102,11 @@ export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, op
     warnings: d.warnings,
     calibration: options.calibration ?? null,
   };
+  return { derived, map: map! };
 }
+
+/** The cache options of a recipe's map: the same for deriveRecipe and recipeStateMap, so both find one map. */
+const mapOptions = (materials: RecipeMaterials, parameters: Partial<ClassifierParameters> | undefined) => ({ parameters, polydispersity: materials.particle.polydispersityPct });
 
 /**
  * The map a recipe is predicted on (free-volume map at its q for depletion, generic otherwise),
@@ -110,5 +118,5 @@ export function recipeStateMap(recipe: RecipeInput, materials: RecipeMaterials, 
   // so a mass fraction is converted as deriveRecipeParameters does (clamped: that one names a bad φ).
   const phi = physics.particleVolumeFraction ?? Math.min(0.7, volumeFractionFromMassFraction(physics.particleMassFraction ?? 0.1, physics.particle.densityGPerCm3, physics.solvent.densityGPerCm3));
   const model = recipeAttraction(physics, phi, recipe.temperatureC + 273.15).mapModel;
-  return cachedStateMap(model, { parameters, polydispersity: materials.particle.polydispersityPct });
+  return cachedStateMap(model, mapOptions(materials, parameters));
 }

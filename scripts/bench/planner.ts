@@ -22,7 +22,7 @@ import {
   type PlanTemplate,
   type ValueRange,
 } from '../../shared/planning';
-import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 
 const SAMPLES = 10_000;
@@ -75,7 +75,7 @@ function planOnce(c: Case, evidence: EvidenceInput[]) {
     evidence, uncertainty: c.uncertainty,
     verify: (p, l) => {
       const recipe = plannedRecipeInput(c.template, p, l, 'bench');
-      const d = deriveRecipe(recipe, materials, { parameters: c.parameters, map: recipeStateMap(recipe, materials, c.parameters) });
+      const d = deriveRecipe(recipe, materials, { parameters: c.parameters }).derived;
       return { state: d.predictedState, margin: d.margin, detail: d };
     },
   });

@@ -1,5 +1,5 @@
 import { randomBytes } from 'node:crypto';
-import { deriveRecipe, recipeStateMap } from '../../shared/recipe-derivation';
+import { deriveRecipe } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 import { OBSERVATION_METHODS } from '../../shared/states';
 import { Depletant, Observation, ParticleSystem, Programme, Recipe, Solvent, User } from '../../server/models';
@@ -26,7 +26,7 @@ export async function seedLargeProgramme(observationCount = 10_000) {
   for (let i = 0; i < 20; i++) {
     for (let j = 0; j < 10; j++) {
       const input = { programmeId: programme.id, name: `Bench ${i}-${j}`, particleId: particle.id, solventId: solvent.id, fraction: { kind: 'volume' as const, value: 0.03 + i * 0.028 }, temperatureC: 25, attraction: { source: 'depletion' as const, depletantId: depletant.id, concentrationGL: 0.5 + j * 1.2 } };
-      const derived = deriveRecipe(input, materials, { map: recipeStateMap(input, materials) });
+      const { derived } = deriveRecipe(input, materials);
       rows.push({ code: `BIG-${String(number++).padStart(4, '0')}`, programmeId: programme.id, name: input.name, particleId: particle.id, solventId: solvent.id, fractionKind: 'volume' as const, fractionValue: input.fraction.value, temperatureC: 25, attractionSource: 'depletion' as const, depletantId: depletant.id, depletantGl: input.attraction.concentrationGL, saltId: null, saltMm: null, contactEnergyKt: null, rangeSigma: null, notes: null, origin: null, phi: derived.phi, reducedB2: derived.reducedB2, predictedState: derived.predictedState, margin: derived.margin, modelVersion: derived.modelVersion, derived, createdBy: null, updatedBy: null });
     }
   }

@@ -8,8 +8,9 @@ import type { Config } from '../config';
 import { Attachment, CheckSchedule, Depletant, Observation, ParticleSystem, Programme, Recipe, Salt, Shortlist, ShortlistEvent, ShortlistItem, Solvent, type User } from '../models';
 import { attractionColumns } from '../presenters/recipe';
 import { recordAudit } from '../services/audit';
-import { deriveForRecipe, recipeMaterials } from '../services/predictions';
-import { deriveRecipe, recipeStateMap } from '../../shared/recipe-derivation';
+import { deriveForRecipe } from '../services/predictions';
+import { materialsOfRecipe } from '../services/recipe-materials';
+import { deriveRecipe } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 import { demoMicrograph } from './micrograph';
 import { DEMO_CHECK_AGES, demoAgeingSamples } from './demo-ageing';
@@ -54,8 +55,8 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
   async function addRecipe(programme: Programme, name: string, input: Omit<RecipeInput, 'programmeId' | 'name'>, author: User) {
     const full: RecipeInput = { programmeId: programme.id, name, ...input };
     const derived = await deriveForRecipe(full, transaction);
-    const materials = await recipeMaterials(full, transaction);
-    const truth = deriveRecipe(full, materials, { parameters: TEAM_REALITY, map: recipeStateMap(full, materials, TEAM_REALITY) });
+    const materials = await materialsOfRecipe(full, transaction);
+    const truth = deriveRecipe(full, materials, { parameters: TEAM_REALITY }).derived;
     const number = nextCode.get(programme.id)!;
     nextCode.set(programme.id, number + 1);
     const recipe = await Recipe.create(

@@ -4,15 +4,16 @@ import { observationColumns, type BenchForFit, type ObservationRowForFit } from 
 import type { CalibrationFit } from '../../shared/calibration/types';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import { PHYSICS_MODEL_VERSION, PhysicsArgumentError } from '../../shared/physics';
-import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
 import type { PredictionRecompute } from '../../shared/views/calibration';
 import { conflict, HttpError, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
-import { Calibration, Depletant, Observation, ParticleSystem, Recipe, Salt, Solvent, User } from '../models';
+import { Calibration, Observation, Recipe, User } from '../models';
 import { recipeInputOf } from '../models/recipe-shapes';
 import { requireProgramme } from './lookups';
 import { adhocPrediction, programmeParameters } from './predictions';
+import { materialsOfRecipes, type LoadedMaterials } from './recipe-materials';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -40,25 +41,10 @@ export async function loadCalibration(programmeId: number, id: number, transacti
   return calibration;
 }
 
-/** The library rows of many recipes with one query per kind of material. */
-async function materialsOf(recipes: Recipe[], transaction: Transaction | null): Promise<Map<number, RecipeMaterials | null>> {
-  const ids = (pick: (r: Recipe) => number | null) => [...new Set(recipes.map(pick).filter((id): id is number => id !== null))];
-  const byId = async <M extends { id: number }>(model: { findAll(options: object): Promise<M[]> }, list: number[]) =>
-    new Map((list.length ? await model.findAll({ where: { id: { [Op.in]: list } }, transaction }) : []).map((m) => [m.id, m]));
-  const [particles, solvents, depletants, salts] = await Promise.all([
-    byId<ParticleSystem>(ParticleSystem, ids((r) => r.particleId)),
-    byId<Solvent>(Solvent, ids((r) => r.solventId)),
-    byId<Depletant>(Depletant, ids((r) => r.depletantId)),
-    byId<Salt>(Salt, ids((r) => r.saltId)),
-  ]);
-  return new Map(
-    recipes.map((r) => {
-      const particle = particles.get(r.particleId);
-      const solvent = solvents.get(r.solventId);
-      if (!particle || !solvent) return [r.id, null];
-      return [r.id, { particle, solvent, depletant: r.depletantId ? depletants.get(r.depletantId) ?? null : null, salt: r.saltId ? salts.get(r.saltId) ?? null : null }];
-    }),
-  );
+/** The library rows of each recipe by its id, or null when one of them no longer exists. */
+async function materialsByRecipe(recipes: Recipe[], transaction: Transaction | null): Promise<Map<number, RecipeMaterials | null>> {
+  const found = await materialsOfRecipes(recipes.map(recipeInputOf), transaction);
+  return new Map(recipes.map((r, i) => [r.id, 'missing' in found[i] ? null : (found[i] as LoadedMaterials)]));
 }
 
 /** Observation rows read per query when gathering the bench for a fit: a few ms of request-thread work each. */
@@ -72,7 +58,7 @@ const FIT_READ_PAGE_ROWS = 5000;
  */
 export async function benchForFit(programmeId: number, transaction: Transaction | null): Promise<BenchForFit> {
   const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, transaction });
-  const materials = await materialsOf(recipes, transaction);
+  const materials = await materialsByRecipe(recipes, transaction);
   const plain = <T extends object>(row: T | null | undefined) => (row ? ((row as unknown as { get(o: { plain: true }): T }).get({ plain: true })) : null);
   const rows: ObservationRowForFit[] = [];
   for (let lastId = 0; ; ) {
@@ -178,7 +164,7 @@ async function storeFit(ctx: Ctx, programmeId: number, input: CalibrationFitInpu
 export async function recomputePredictions(transaction: Transaction, programmeId: number): Promise<PredictionRecompute> {
   const { parameters, calibration } = await programmeParameters(programmeId, transaction);
   const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
-  const materials = await materialsOf(recipes, transaction);
+  const materials = await materialsByRecipe(recipes, transaction);
   let changedStates = 0;
   for (const recipe of recipes) {
     const m = materials.get(recipe.id);

@@ -11,7 +11,7 @@ import {
   type ValueRange,
 } from '../../shared/planning';
 import { PhysicsArgumentError, resolveClassifierParameters, type ClassifierParameters } from '../../shared/physics';
-import { deriveRecipe, recipeFieldOf, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, recipeFieldOf, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { PlanRequest } from '../../shared/schemas/plans';
 import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import type { MapPoints } from '../../shared/views/team-data';
@@ -121,7 +121,7 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
   const verify = (phi: number, level: number) => {
     const recipe = plannedRecipeInput(template, phi, level, 'candidate');
     try {
-      const derived = deriveRecipe(recipe, materials, { parameters, map: recipeStateMap(recipe, materials, parameters), calibration });
+      const { derived } = deriveRecipe(recipe, materials, { parameters, calibration });
       return { state: derived.predictedState, margin: derived.margin, detail: derived };
     } catch (error) {
       if (error instanceof PhysicsArgumentError) return null;

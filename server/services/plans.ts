@@ -13,7 +13,7 @@ import {
   type PlanTemplate,
   type ValueRange,
 } from '../../shared/planning';
-import { deriveRecipe, recipeFieldOf, recipeStateMap } from '../../shared/recipe-derivation';
+import { recipeFieldOf } from '../../shared/recipe-derivation';
 import type { PlanListQuery, PlanRequest } from '../../shared/schemas/plans';
 import { STATE_LABELS, type ObservedState } from '../../shared/states';
 import type { PlanPrice } from '../../shared/views/plan';
@@ -26,7 +26,8 @@ import { requireProgramme } from './lookups';
 import { paged } from './paging';
 import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import { buildMapPoints } from './map-points';
-import { programmeParameters, recipeMaterials } from './predictions';
+import { programmeParameters } from './predictions';
+import { materialsOfRecipe } from './recipe-materials';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import type { PlanJob } from './plan-compute';
 
@@ -46,9 +47,6 @@ async function boundaryUncertainty(calibration: { id: number } | null, transacti
   return { shift: row.attractionShift, standardError: row.attractionShiftSe, sharpness: typeof slope === 'number' && slope > 0 ? slope : null, source: 'calibration' };
 }
 
-/** The library rows a plan uses (the same lookup as a recipe's), or a 400 naming the field. */
-const planMaterials = (input: PlanRequest, transaction: Transaction | null) => recipeMaterials(input, transaction);
-
 const price = (override: number | null | undefined, library: number | null): PlanPrice =>
   override !== undefined && override !== null ? { pricePerKg: override, source: 'plan' } : library !== null ? { pricePerKg: library, source: 'library' } : { pricePerKg: null, source: 'none' };
 
@@ -64,12 +62,12 @@ function physicsProblem(error: unknown): never {
  * Runs the planner for a request and stores the plan: the materials from the library (400 naming
  * the field that points nowhere), the programme's accepted calibration (programmeParameters, the
  * single source) and its uncertainty, the bench evidence, then planCompositions with every chosen
- * composition re-derived exactly as a recipe (deriveRecipe on the cached programme map).
+ * composition re-derived exactly as a recipe (deriveRecipe on the recipe's cached map).
  */
 export async function runPlan(ctx: Ctx, input: PlanRequest) {
   const programme = await requireProgramme(input.programmeId, ctx.transaction);
   if (programme.archivedAt) throw badRequest('programmeId: the programme is archived', 'programmeId');
-  const materials = await planMaterials(input, ctx.transaction);
+  const materials = await materialsOfRecipe(input, ctx.transaction);
   const { parameters, calibration } = await programmeParameters(input.programmeId, ctx.transaction);
   const uncertainty = await boundaryUncertainty(calibration, ctx.transaction);
   const kind = input.attraction.source === 'depletion' ? 'polymer' : 'salt';

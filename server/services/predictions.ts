@@ -1,36 +1,13 @@
 import type { Transaction } from 'sequelize';
 import { classifyPoint, PhysicsArgumentError, type ClassifierParameters } from '../../shared/physics';
 import { cachedStateMap } from '../../shared/state-map-cache';
-import { deriveRecipe, recipeFieldOf, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, recipeFieldOf } from '../../shared/recipe-derivation';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import type { PredictedState } from '../../shared/states';
 import type { RecipeDerived } from '../../shared/views/team-data';
 import { badRequest } from '../errors';
-import { Calibration, Depletant, ParticleSystem, Programme, Salt, Solvent } from '../models';
-
-/** What a recipe (or a plan) names from the library. */
-export interface MaterialChoice {
-  particleId: number;
-  solventId: number;
-  attraction: { source: string; depletantId?: number; saltId?: number };
-}
-
-/** The library rows a recipe or a plan uses, or a 400 naming the field that points nowhere. */
-export async function recipeMaterials(
-  input: MaterialChoice,
-  transaction: Transaction | null,
-): Promise<RecipeMaterials & { particle: ParticleSystem; solvent: Solvent; depletant: Depletant | null; salt: Salt | null }> {
-  const particle = await ParticleSystem.findByPk(input.particleId, { transaction });
-  if (!particle) throw badRequest('particleId: no such particle system', 'particleId');
-  const solvent = await Solvent.findByPk(input.solventId, { transaction });
-  if (!solvent) throw badRequest('solventId: no such solvent', 'solventId');
-  const a = input.attraction;
-  const depletant = a.source === 'depletion' ? await Depletant.findByPk(a.depletantId!, { transaction }) : null;
-  if (a.source === 'depletion' && !depletant) throw badRequest('attraction.depletantId: no such depletant', 'attraction.depletantId');
-  const salt = a.source === 'salt' ? await Salt.findByPk(a.saltId!, { transaction }) : null;
-  if (a.source === 'salt' && !salt) throw badRequest('attraction.saltId: no such salt', 'attraction.saltId');
-  return { particle, solvent, depletant, salt };
-}
+import { Calibration, Programme } from '../models';
+import { materialsOfRecipe } from './recipe-materials';
 
 /**
  * The classifier parameters of a programme's accepted calibration and its label, or none (the
@@ -60,11 +37,10 @@ export async function programmeParameters(
  * composition become a 400 on the form field they concern.
  */
 export async function deriveForRecipe(input: RecipeInput, transaction: Transaction | null): Promise<RecipeDerived> {
-  const materials = await recipeMaterials(input, transaction);
+  const materials = await materialsOfRecipe(input, transaction);
   const { parameters, calibration } = await programmeParameters(input.programmeId, transaction);
   try {
-    const map = recipeStateMap(input, materials, parameters);
-    return deriveRecipe(input, materials, { parameters, map, calibration });
+    return deriveRecipe(input, materials, { parameters, calibration }).derived;
   } catch (error) {
     if (error instanceof PhysicsArgumentError) throw badRequest(`${recipeFieldOf(error)}: ${error.message}`, recipeFieldOf(error));
     throw error;

@@ -69,7 +69,7 @@ export function compositionSpace(template: PlanTemplate, materials: RecipeMateri
     const key = JSON.stringify([materials.particle, materials.solvent, materials.salt?.valence, template.temperatureC, dose]);
     let b2 = saltB2Cache.get(key);
     if (b2 === undefined) {
-      const derived = deriveRecipe(plannedRecipeInput(template, 0.1, dose, 'probe'), materials, { parameters, map: programmeMap });
+      const { derived } = deriveRecipe(plannedRecipeInput(template, 0.1, dose, 'probe'), materials, { parameters });
       b2 = derived.reducedB2 ?? -1e6;
       saltB2Cache.set(key, b2);
       if (saltB2Cache.size > 5000) saltB2Cache.delete(saltB2Cache.keys().next().value!);

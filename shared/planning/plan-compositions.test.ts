@@ -47,7 +47,7 @@ function problem(template: PlanTemplate, overrides: Partial<PlanProblem> & { phi
 /** The recipe's own derivation (shared/physics), independent of the planner's fast placement. */
 function derive(template: PlanTemplate, phi: number, level: number, parameters?: { attractionShift: number }) {
   const recipe = plannedRecipeInput(template, phi, level, 'check');
-  return deriveRecipeParameters(physicsInputFor(recipe, materials, parameters), { map: recipeStateMap(recipe, materials, parameters) });
+  return deriveRecipeParameters(physicsInputFor(recipe, materials, parameters), { mapFor: () => recipeStateMap(recipe, materials, parameters) });
 }
 
 /** A space whose attraction is B2* = 1 − level on the mean-field map: the boundary is known in closed form. */

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { gelOnset } from '../../shared/calibration';
 import { syntheticObservations } from '../../shared/calibration/test-support/synthetic-observations';
 import { DEFAULT_CLASSIFIER_PARAMETERS, squareWellDepthFromReducedB2 } from '../../shared/physics';
-import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { CalibrationListView, CalibrationView } from '../../shared/views/calibration';
@@ -205,7 +205,7 @@ describe('accepting and withdrawing a calibration', () => {
     for (const r of recipes) {
       const stored = await storedRecipe(r.id);
       const materials = await materialsFor(r.input);
-      const expected = deriveRecipe(r.input, materials, { parameters: first.parameters, map: recipeStateMap(r.input, materials, first.parameters), calibration: label });
+      const expected = deriveRecipe(r.input, materials, { parameters: first.parameters, calibration: label }).derived;
       expect(stored.derived).toEqual(JSON.parse(JSON.stringify(expected)));
       const row = await Recipe.findByPk(r.id);
       expect([row!.predictedState, row!.margin, row!.phi]).toEqual([expected.predictedState, expected.margin, expected.phi]);
@@ -245,7 +245,7 @@ describe('accepting and withdrawing a calibration', () => {
     for (const r of recipes) {
       const stored = await storedRecipe(r.id);
       const materials = await materialsFor(r.input);
-      expect(stored.derived).toEqual(JSON.parse(JSON.stringify(deriveRecipe(r.input, materials))));
+      expect(stored.derived).toEqual(JSON.parse(JSON.stringify(deriveRecipe(r.input, materials).derived)));
       expect(stored.derived.calibration).toBeNull();
     }
     for (const o of await adhocObservations(programme)) expect(o.predictedState).toBe(adhocPrediction(o.adhoc!.phi, o.adhoc!.reducedB2, undefined));

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { syntheticObservations } from '../../shared/calibration/test-support/synthetic-observations';
 import { PHYSICS_MODEL_VERSION } from '../../shared/physics';
 import { BAND_Z, plannedRecipeInput } from '../../shared/planning';
-import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { PlanInput } from '../../shared/schemas/plans';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { PlanSummaryView, PlanView } from '../../shared/views/plan';
@@ -73,7 +73,7 @@ describe('POST /api/plans', () => {
       expect(c.phi).toBeGreaterThanOrEqual(0.05);
       expect(c.phi).toBeLessThanOrEqual(0.4);
       const recipe = plannedRecipeInput(template, c.phi, c.level, 'check');
-      const derived = deriveRecipe(recipe, materials(), { map: recipeStateMap(recipe, materials()) });
+      const { derived } = deriveRecipe(recipe, materials());
       expect(derived.predictedState).toBe('gel');
       expect(derived.margin).toBeGreaterThanOrEqual(0.15);
       expect(c.derived.predictedState).toBe(derived.predictedState);

@@ -26,7 +26,7 @@ describe('POST /api/recipes', () => {
     const response = await formulator.post('/api/recipes').send(input);
     expect(response.status).toBe(201);
     const stored = await Recipe.findByPk(response.body.recipe.id);
-    const expected = deriveRecipe(input, { particle: presentParticle(lib.particle), solvent: presentSolvent(lib.solvent), depletant: presentDepletant(lib.depletant), salt: null });
+    const expected = deriveRecipe(input, { particle: presentParticle(lib.particle), solvent: presentSolvent(lib.solvent), depletant: presentDepletant(lib.depletant), salt: null }).derived;
     expect(stored!.derived).toEqual(expected);
     expect(stored!.modelVersion).toBe(expected.modelVersion);
     expect(stored!.phi).toBe(expected.phi);

@@ -9,12 +9,11 @@ import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { attractionToMapY } from '../map/attraction-to-map-y';
 import { FREE_VOLUME_MAX_POLYMER } from '../depletion/free-volume-limits';
-import { DEFAULT_SQUARE_WELL_RANGE } from '../map/resolve-map-model';
 import { buildStateMap } from '../map/build-state-map';
 import { SHORT_RANGE_LIMIT } from '../map/glass-line-table';
 import { classifyPoint } from '../map/classify-point';
 import { PHYSICS_MODEL_VERSION } from '../map/model-version';
-import type { StateMap } from '../map/types';
+import type { MapModel, StateMap } from '../map/types';
 import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireInRange } from '../validation/require-in-range';
 import { requirePositive } from '../validation/require-positive';
@@ -38,13 +37,14 @@ export type { RecipeDerivation, RecipeInput } from './recipe-types';
  * the concentration conversion; a 'solvent' concentration basis is scaled by (1 − φ).
  *
  * @param input the recipe (see RecipeInput for units).
- * @param options.map a prebuilt map to classify against, used when its model equals the one the
- *   recipe needs (otherwise a map is built: ~10–40 ms).
+ * @param options.mapFor gives the map to classify against for the model the recipe needs, built
+ *   with `input.parameters` and the particle's polydispersity (e.g. from a cache: see
+ *   shared/state-map-cache.ts); without it a map is built (~10–40 ms).
  * @throws PhysicsArgumentError naming the field for missing or out-of-range input (e.g.
  *   `particle.radiusNm must be a radius in nm in (0, Infinity); got 0`).
  * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGPerCm3: 1.05 }, solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 }, temperatureC: 25, particleVolumeFraction: 0.2 }).diffusionM2PerS // 2.4537e-12
  */
-export function deriveRecipeParameters(input: RecipeInput, options: { map?: StateMap } = {}): RecipeDerivation {
+export function deriveRecipeParameters(input: RecipeInput, options: { mapFor?: (model: MapModel) => StateMap } = {}): RecipeDerivation {
   if (input === null || typeof input !== 'object') throw new PhysicsArgumentError('input', 'a recipe object', input);
   if (!input.particle || !input.solvent) throw new PhysicsArgumentError(input.particle ? 'solvent' : 'particle', 'an object with the material properties', undefined);
   const radiusNm = requirePositive('particle.radiusNm', input.particle.radiusNm, 'a radius in nm');
@@ -70,12 +70,12 @@ export function deriveRecipeParameters(input: RecipeInput, options: { map?: Stat
     warnings.push('Percus–Yevick has no real root at this φ and τ (inside its no-solution band): reported as no solution; the map keeps the nearest computed boundaries.');
   }
 
-  const sameModel = options.map && JSON.stringify(options.map.model) === JSON.stringify({ ...attraction.mapModel, ...(attraction.mapModel.kind === 'generic' ? { lambda: attraction.mapModel.lambda ?? DEFAULT_SQUARE_WELL_RANGE } : {}) });
-  let map = sameModel ? options.map! : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
+  const given = options.mapFor !== undefined;
+  let map = given ? options.mapFor!(attraction.mapModel) : buildStateMap(attraction.mapModel, { parameters: input.parameters, polydispersity });
   if (map.crystalSuppressed) warnings.push(`Polydispersity ${polydispersity} % above ${map.parameters.polydispersityCrystalThreshold} %: crystallisation taken as suppressed.`);
   const mapY = attractionToMapY(map, attraction.attraction);
   const uOnMap = (mapY - map.y.weakest) / (map.y.strongest - map.y.weakest);
-  let parametersForPoint = sameModel ? input.parameters : undefined;
+  let parametersForPoint = given ? input.parameters : undefined;
   if (uOnMap > 1 && map.model.kind === 'depletion' && map.model.q > SHORT_RANGE_LIMIT) {
     // Long-range depletion is placed by free-volume theory itself, whose domes keep widening
     // far above the default top: classify on a map tall enough to hold the sample.

@@ -1,7 +1,7 @@
 import { useMemo, type ReactNode } from 'react';
 import type { StateMap } from '@shared/physics/map/types';
 import { PhysicsArgumentError } from '@shared/physics/validation/physics-argument-error';
-import { deriveRecipe, recipeStateMap, type RecipeMaterials } from '@shared/recipe-derivation';
+import { deriveRecipe, type RecipeMaterials } from '@shared/recipe-derivation';
 import { recipeInputSchema, type RecipeInput } from '@shared/schemas/recipes';
 import type { RecipeDerived } from '@shared/views/team-data';
 import { Notice } from '@/components/ui/notice';
@@ -35,8 +35,8 @@ export function LiveDerivation({ values, renderMap }: { values: RecipeInput; ren
     })();
     if (!materials) return { ok: false, message: 'Loading the library…' };
     try {
-      const map = recipeStateMap(input, materials);
-      return { ok: true, derived: deriveRecipe(input, materials, { map }), map };
+      const { derived, map } = deriveRecipe(input, materials);
+      return { ok: true, derived, map };
     } catch (error) {
       return { ok: false, message: error instanceof PhysicsArgumentError ? error.message : 'The prediction could not be computed for these values.' };
     }
