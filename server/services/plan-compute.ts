@@ -13,11 +13,13 @@ import {
 import { PhysicsArgumentError, resolveClassifierParameters, type ClassifierParameters } from '../../shared/physics';
 import { deriveRecipe, recipeFieldOf, type RecipeMaterials } from '../../shared/recipe-derivation';
 import type { PlanRequest } from '../../shared/schemas/plans';
+import { mapAttractionOf } from '../../shared/map-placement';
 import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import type { MapPoints } from '../../shared/views/team-data';
 import type { PlanPrice } from '../../shared/views/plan';
 import type { RecipeDerived } from '../../shared/views/team-data';
 import type { StoredPlanOutcome } from '../models/plan';
+import { programmeShelfLifeModel, shelfLifeCovariatesOf, shelfLifeRequestNote, shelfLifeVerdict, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 
 /**
  * The planner's computation, without the database: what runPlan read (materials as plain rows,
@@ -32,6 +34,8 @@ export interface PlanJob {
   uncertainty: BoundaryUncertainty;
   points: MapPoints;
   prices: { particles: PlanPrice; solvent: PlanPrice; polymer: PlanPrice | null; salt: PlanPrice | null };
+  /** The programme's recipes and bench samples for the shelf-life column (server/services/shelf-life.ts shelfLifeInput). */
+  shelfLife: { recipes: ShelfLifeRecipeInput[]; samples: ShelfLifeSampleInput[] };
 }
 
 /** A physics problem of the request, with the form field it belongs to. */
@@ -76,7 +80,6 @@ export const planLevels = (input: PlanRequest): ValueRange => (input.attraction.
  * A recipe on the plan's own size ratio is placed by its polymer fraction, any other by B2*.
  */
 function programmeEvidence(points: MapPoints, space: CompositionSpace): EvidenceInput[] {
-  const mapQ = space.map.model.kind === 'depletion' ? space.map.model.q : null;
   const recipeList = decodeMapRecipes(points);
   const recipes = new Map(recipeList.map((r) => [r.id, r]));
   const latest = new Map<string, EvidenceInput>();
@@ -87,10 +90,7 @@ function programmeEvidence(points: MapPoints, space: CompositionSpace): Evidence
     if (recipeId !== null) {
       const r = recipes.get(recipeId);
       if (!r || r.phi === null) continue;
-      const { polymerReservoir, sizeRatio, reducedB2: rB2 } = r;
-      const attraction = mapQ !== null && polymerReservoir !== null && sizeRatio !== null && Math.abs(sizeRatio - mapQ) <= 1e-5 * mapQ
-        ? { kind: 'depletion' as const, q: mapQ, polymerReservoir }
-        : rB2 !== null ? { kind: 'b2' as const, value: rB2 } : null;
+      const attraction = mapAttractionOf(space.map, r);
       if (attraction) item = { id, label: r.code ?? `recipe ${recipeId}`, phi: r.phi, attraction, observedState, ageDays };
     } else if (o.phi !== null && o.reducedB2 !== null) {
       item = { id, label: `ad-hoc sample ${id}`, phi: o.phi, attraction: { kind: 'b2', value: o.reducedB2 }, observedState, ageDays };
@@ -154,6 +154,13 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
   } catch (error) {
     physicsProblem(error);
   }
+  // Shelf life: the programme's Cox model on each listed candidate. With "stays a gel for at least
+  // N days", candidates predicted to fall short keep their place among themselves but follow those
+  // that meet it (or cannot be judged); a refused model leaves the ranking as it was and says so.
+  const minimumDays = input.minShelfLifeDays ?? null;
+  const shelfModel = programmeShelfLifeModel(job.shelfLife.recipes, job.shelfLife.samples);
+  const judged = outcome.candidates.map((c) => ({ c, shelfLife: shelfModel.status === 'fitted' ? shelfLifeVerdict(shelfModel, shelfLifeCovariatesOf(c.verified!), minimumDays) : null }));
+  const ranked = minimumDays === null ? judged : [...judged.filter((j) => j.shelfLife?.meets !== false), ...judged.filter((j) => j.shelfLife?.meets === false)];
   const stored: StoredPlanOutcome = {
     materials: { particle: materials.particle.name, solvent: materials.solvent.name, depletant: materials.depletant?.name ?? null, salt: materials.salt?.name ?? null },
     prices,
@@ -163,9 +170,9 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
     map: { model: space.map.model, parameters: resolveClassifierParameters(parameters as Partial<ClassifierParameters> | undefined), polydispersity: materials.particle.polydispersityPct, yLabel: space.map.y.label },
     outcome: {
       feasible: outcome.candidates.length > 0,
-      candidates: outcome.candidates.map((c, index) => ({
+      candidates: ranked.map(({ c, shelfLife }, index) => ({
         index, phi: c.phi, level: c.level, predictedState: c.state, margin: c.margin, nearestBoundary: c.nearestBoundary, mapY: c.mapY,
-        costPerLitre: c.cost, evidence: c.evidence, score: c.score, scores: c.scores, derived: c.verified!, recipe: null,
+        costPerLitre: c.cost, evidence: c.evidence, score: c.score, scores: c.scores, derived: c.verified!, recipe: null, shelfLife,
       })),
       counts: outcome.counts,
       bestInRange: outcome.bestInRange,
@@ -183,6 +190,7 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
       method: PLAN_METHOD,
       costFormula: COST_FORMULA,
       notes: outcome.notes,
+      shelfLife: { minimumDays, status: shelfModel.status, note: shelfLifeRequestNote(shelfModel, minimumDays), lastTimeDays: shelfModel.lastTimeDays },
       elapsedMs: Math.round(performance.now() - started),
     },
   };

@@ -30,6 +30,7 @@ import { programmeParameters } from './predictions';
 import { materialsOfRecipe } from './recipe-materials';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import type { PlanJob } from './plan-compute';
+import { shelfLifeInput } from './shelf-life';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -86,6 +87,7 @@ export async function runPlan(ctx: Ctx, input: PlanRequest) {
     uncertainty,
     points: await buildMapPoints(ctx.deps.sequelize, input.programmeId),
     prices,
+    shelfLife: await shelfLifeInput(ctx.deps.sequelize, input.programmeId),
   };
   // In a worker thread: 10,000 sampled compositions classified and ranked take seconds of CPU.
   const { HEAVY_JOBS_PER_USER, HEAVY_JOB_SECONDS } = ctx.deps.config;

@@ -1,7 +1,7 @@
 import { QueryTypes, type Sequelize } from 'sequelize';
 import { attractionToMapY, PhysicsArgumentError } from '../../shared/physics';
 import { mapPosition } from '../../shared/planning/map-position';
-import { COLLAPSE_PHYSICS_CONTEXT, type ProgrammeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
+import { COLLAPSE_PHYSICS_CONTEXT, shelfLifeCovariatesOf, type ProgrammeShelfLife, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 import { survivalRecordsFromChecks, type SampleCheck } from '../../shared/shelf-life/survival-records-from-checks';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { ObservedState } from '../../shared/states';
@@ -47,12 +47,11 @@ export async function shelfLifeInput(sequelize: Sequelize, programmeId: number):
     } catch (error) {
       if (!(error instanceof PhysicsArgumentError)) throw error;
     }
-    const peclet = d.timescales?.gravitationalPeclet ?? null;
     return {
       id: r.id, code: r.code, name: r.name, particleId: r.particle_id, depletantId: r.depletant_id, solventId: r.solvent_id,
       position,
       region: d.predictedState,
-      covariates: { attractionKt: d.contactEnergyKT, phi: d.phi, log10Peclet: peclet !== null && peclet > 0 ? Math.log10(peclet) : null },
+      covariates: shelfLifeCovariatesOf(d),
     };
   });
   const checks = await sequelize.query<{ recipe_id: number; mixed_at: Date | string; age_days: number; observed_state: ObservedState }>(

@@ -38,6 +38,8 @@ export const planInputSchema = z
     experimentCount: z.number({ error: 'experimentCount must be a number' }).int('experimentCount must be a whole number').min(0, 'experimentCount must be at least 0').max(PLAN_LIMITS.experiments, `experimentCount must be at most ${PLAN_LIMITS.experiments}`).default(PLAN_LIMITS.defaultExperiments),
     /** Price per kg for this plan only; an absent one comes from the library. */
     prices: z.object({ particles: optionalPrice, solvent: optionalPrice, depletant: optionalPrice, salt: optionalPrice }).strict().optional(),
+    /** "Stays a gel for at least N days": judged with the programme's shelf-life model (shared/shelf-life). */
+    minShelfLifeDays: z.number({ error: 'minShelfLifeDays must be a number of days' }).int('minShelfLifeDays must be a whole number of days').min(1, 'minShelfLifeDays must be at least 1 day').max(3650, 'minShelfLifeDays must be at most 3650 days').optional(),
     ranking: z
       .object({ margin: weight('Margin'), cost: weight('Cost'), evidence: weight('Evidence') })
       .strict()

@@ -36,6 +36,7 @@ export {
 } from './shelf-life-model';
 export {
   programmeShelfLife,
+  programmeShelfLifeModel,
   REGION_LABELS,
   SHELF_LIFE_RULES,
   type ProgrammeShelfLife,
@@ -47,3 +48,5 @@ export {
   type ShelfLifeRegion,
   type SurvivalSummary,
 } from './programme-shelf-life';
+export { shelfLifeCovariatesOf } from './shelf-life-covariates-of';
+export { shelfLifeVerdict, shelfLifeRequestNote, type ShelfLifeVerdict } from './shelf-life-requirement';

@@ -114,7 +114,7 @@ export function programmeShelfLife(recipes: readonly ShelfLifeRecipeInput[], sam
   groupLists.forEach((ids, g) => ids.forEach((id) => groupOf.set(id, g)));
 
   const used = recipes.filter((r) => samplesOf.has(r.id));
-  const modelRecords = used.flatMap((r) => samplesOf.get(r.id)!.map((s) => ({ ...s, covariates: r.covariates })));
+  const modelRecords = modelRecordsOf(recipes, samples);
   const drivers = fitShelfLifeModel(modelRecords);
   const focus = options.focusRecipeId;
   const recipeEntries = (focus === undefined ? used : recipes.filter((r) => r.id === focus)).map((r): RecipeShelfLife => {
@@ -161,4 +161,20 @@ export function programmeShelfLife(recipes: readonly ShelfLifeRecipeInput[], sam
 function summarise(records: readonly SurvivalRecord[]): SurvivalSummary {
   const curve = kaplanMeier(records);
   return { curve, median: medianTimeToCollapse(curve), summary: describeSurvival(curve) };
+}
+
+/**
+ * The programme's model of what drives collapse alone (fitShelfLifeModel on every sample with its
+ * recipe's covariates), for callers that need no curves, such as the planner.
+ */
+export function programmeShelfLifeModel(recipes: readonly ShelfLifeRecipeInput[], samples: readonly ShelfLifeSampleInput[]): ShelfLifeModel {
+  return fitShelfLifeModel(modelRecordsOf(recipes, samples));
+}
+
+function modelRecordsOf(recipes: readonly ShelfLifeRecipeInput[], samples: readonly ShelfLifeSampleInput[]) {
+  const byId = new Map(recipes.map((r) => [r.id, r]));
+  return samples.flatMap((s) => {
+    const recipe = byId.get(s.recipeId);
+    return recipe ? [{ timeDays: s.timeDays, collapsed: s.collapsed, covariates: recipe.covariates }] : [];
+  });
 }

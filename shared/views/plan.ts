@@ -1,3 +1,4 @@
+import type { ShelfLifeVerdict } from '../shelf-life/shelf-life-requirement';
 import type { ClassifierParameters, MapModel } from '../physics';
 import type { BoundaryUncertainty, CostPerLitre, FeasibleWindow, NearestEvidence, PlanAdvice } from '../planning/types';
 import type { PlanRequest } from '../schemas/plans';
@@ -35,6 +36,8 @@ export interface PlanCandidateView {
   /** The exact derivation a recipe of this composition stores. */
   derived: RecipeDerived;
   recipe: { id: number; code: string } | null;
+  /** The programme's shelf-life model on this composition (absent in plans made before it existed; null when the model was refused). */
+  shelfLife?: ShelfLifeVerdict | null;
 }
 
 export interface PlanExperimentView {
@@ -78,6 +81,8 @@ export interface PlanView {
     method: string;
     costFormula: string;
     notes: string[];
+    /** The shelf-life column and request: the minimum asked (or null), whether the model was fitted, and its words. */
+    shelfLife?: { minimumDays: number | null; status: 'fitted' | 'refused'; note: string; /** The longest the bench has watched a sample, in days. */ lastTimeDays: number };
     elapsedMs: number;
   };
   recipes: PlanRecipeRef[];

@@ -60,6 +60,7 @@ describe('planning gels', () => {
     await screenshot(page, 'planner-empty');
 
     const form = await fillRequest(page, { polymerTo: '12', margin: '0.15', candidates: '5' });
+    await form.getByLabel('Stays a gel for at least (days)').fill('30');
     await form.getByRole('button', { name: 'Plan compositions' }).click();
     await page.waitForURL(/plan=\d+/);
     const planId = Number(new URL(page.url()).searchParams.get('plan'));
@@ -70,6 +71,9 @@ describe('planning gels', () => {
     const stored = (await Plan.findByPk(planId))!;
     expect(stored.outcome.outcome.candidates.every((c) => c.derived.predictedState === 'gel' && c.derived.margin! >= 0.15)).toBe(true);
     expect(await rows.first().textContent()).toContain('Gel');
+    // One bench check and no collapse: the shelf-life minimum cannot be honoured, and the plan says so.
+    expect(await page.getByTestId('plan-shelf-life-note').textContent()).toMatch(/^Asked to stay a gel for at least 30 days: cannot be honoured\. Cannot fit what drives collapse: 0 collapses seen/);
+    expect(await page.getByRole('columnheader', { name: 'Shelf life (predicted)' }).count()).toBe(1);
     await page.getByRole('img', { name: new RegExp(`^State map of plan ${planId}`) }).waitFor();
     expect(await page.locator('[data-plan-window]').count()).toBe(1);
     expect(await page.locator('[data-plan-candidate]').count()).toBe(5);

@@ -3,7 +3,7 @@ import { StateBadge } from '@/components/ui/state-badge';
 import { Table, Td, Th } from '@/components/ui/table';
 import { formatNumber } from '@/lib/format';
 import type { PlanView } from '@shared/views/plan';
-import { costText, doseHeading, evidenceText } from '../lib/plan-words';
+import { costText, doseHeading, evidenceText, shelfLifeText } from '../lib/plan-words';
 
 /**
  * The ranked candidates of a plan: φ, dose, predicted state, margin, cost per litre and the
@@ -11,7 +11,10 @@ import { costText, doseHeading, evidenceText } from '../lib/plan-words';
  * it already became.
  */
 export function CandidateTable({ plan, chosen, onToggle, canChoose }: { plan: PlanView; chosen: Set<number>; onToggle: (index: number) => void; canChoose: boolean }) {
+  const minimumDays = plan.outcome.shelfLife?.minimumDays ?? null;
+  const lastWatched = plan.outcome.shelfLife?.lastTimeDays ?? null;
   return (
+    <>
     <Table caption={`Ranked candidates of plan ${plan.id}`}>
       <thead>
         <tr>
@@ -23,6 +26,7 @@ export function CandidateTable({ plan, chosen, onToggle, canChoose }: { plan: Pl
           <Th>Margin</Th>
           <Th>Cost per litre</Th>
           <Th>Nearest bench evidence</Th>
+          <Th>Shelf life (predicted)</Th>
           <Th>Recipe</Th>
         </tr>
       </thead>
@@ -43,10 +47,13 @@ export function CandidateTable({ plan, chosen, onToggle, canChoose }: { plan: Pl
             <Td>{formatNumber(c.derived.margin, 2)}</Td>
             <Td>{costText(c.costPerLitre)}</Td>
             <Td className="text-ink-soft">{evidenceText(c.evidence)}</Td>
+            <Td className={c.shelfLife?.meets === false ? 'text-brick-700' : undefined}>{shelfLifeText(c.shelfLife, lastWatched, minimumDays)}</Td>
             <Td>{c.recipe ? <Link to={`/recipes/${c.recipe.code}`}>{c.recipe.code}</Link> : <span className="text-ink-faint">—</span>}</Td>
           </tr>
         ))}
       </tbody>
     </Table>
+    {plan.outcome.shelfLife && <p className="mt-2 text-xs text-ink-soft" data-testid="plan-shelf-life-note">{plan.outcome.shelfLife.note}</p>}
+    </>
   );
 }

@@ -16,7 +16,7 @@ import { RANKINGS, rankingOf } from './rankings';
 import { MaterialOptions, describeMaterial } from '@/features/library/components/material-options';
 import { StateOptions } from '@/components/ui/state-options';
 
-const FIELDS = ['title', 'targetState', 'particleId', 'solventId', 'temperatureC', 'attraction.depletantId', 'attraction.saltId', 'attraction.concentrationGL.min', 'attraction.concentrationGL.max', 'attraction.concentrationMM.min', 'attraction.concentrationMM.max', 'phi.min', 'phi.max', 'minMargin', 'candidateCount', 'experimentCount', 'prices.particles', 'prices.solvent', 'prices.depletant', 'prices.salt'] as const;
+const FIELDS = ['title', 'targetState', 'particleId', 'solventId', 'temperatureC', 'attraction.depletantId', 'attraction.saltId', 'attraction.concentrationGL.min', 'attraction.concentrationGL.max', 'attraction.concentrationMM.min', 'attraction.concentrationMM.max', 'phi.min', 'phi.max', 'minMargin', 'minShelfLifeDays', 'candidateCount', 'experimentCount', 'prices.particles', 'prices.solvent', 'prices.depletant', 'prices.salt'] as const;
 
 const num = { setValueAs: (v: unknown) => (v === '' || v === null || v === undefined ? undefined : Number(v)) };
 
@@ -155,6 +155,9 @@ export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned
           </Field>
           <Field label="Smallest margin" hint="Distance to the nearest boundary that changes the state, in map units (the map is a unit square)." error={errors.minMargin?.message} className="sm:col-span-2">
             {(p) => <TextInput {...p} type="number" step="any" {...register('minMargin', num)} />}
+          </Field>
+          <Field label="Stays a gel for at least (days)" hint="Optional. Judged with the programme's shelf-life model (predicted median days to collapse); candidates that fall short are listed last, marked short." error={errors.minShelfLifeDays?.message} className="sm:col-span-2">
+            {(p) => <TextInput {...p} type="number" step={1} min={1} {...register('minShelfLifeDays', num)} />}
           </Field>
         </fieldset>
         <fieldset className="grid content-start gap-4 rounded-card border border-line p-4 sm:grid-cols-2">

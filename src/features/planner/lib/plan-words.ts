@@ -1,3 +1,4 @@
+import type { ShelfLifeVerdict } from '@shared/shelf-life/shelf-life-requirement';
 import { STATE_LABELS } from '@shared/states';
 import type { CostPerLitre, NearestEvidence } from '@shared/planning/types';
 import type { PlanView } from '@shared/views/plan';
@@ -19,4 +20,17 @@ export function costText(cost: CostPerLitre): string {
 export function evidenceText(evidence: NearestEvidence | null): string {
   if (!evidence) return 'No bench samples yet';
   return `${evidence.label}: ${STATE_LABELS[evidence.observedState].toLowerCase()} at ${formatNumber(evidence.ageDays, 3)} d, ${formatNumber(evidence.distance, 2)} away`;
+}
+
+/**
+ * A candidate's shelf-life column: the predicted median days to collapse ("beyond N d" past the
+ * bench's longest watch), the chance of still standing at the asked minimum, and "short" when it
+ * falls short of it; "—" when the model was refused or the plan predates the column.
+ */
+export function shelfLifeText(verdict: ShelfLifeVerdict | null | undefined, lastWatchedDays: number | null, minimumDays: number | null): string {
+  if (!verdict) return '—';
+  const median = verdict.medianDays === null ? `median beyond ${lastWatchedDays ?? 'the bench\'s'} d` : `median ${verdict.medianDays} d`;
+  const chance = minimumDays !== null && verdict.survivalAtMinimum !== null ? `; ${Math.round(100 * verdict.survivalAtMinimum)} % standing at ${minimumDays} d` : '';
+  const mark = verdict.meets === false ? 'short: ' : '';
+  return `${mark}${median}${chance}`;
 }
