@@ -1,4 +1,4 @@
-import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
+import { mapYOf } from '@shared/map-placement';
 import type { MapBoundary, StateMap } from '@shared/physics/map/types';
 import type { RecipeDerived } from '@shared/views/team-data';
 import type { MapDrawing, MapLine, XY } from './types';
@@ -57,13 +57,8 @@ export function drawnY(map: StateMap, y: number) {
  */
 export function derivedDrawnY(map: StateMap, derived: Pick<RecipeDerived, 'polymerReservoir' | 'sizeRatio' | 'reducedB2'>): number | null {
   try {
-    const y =
-      map.model.kind === 'depletion' && derived.polymerReservoir !== null && derived.sizeRatio !== null
-        ? attractionToMapY(map, { kind: 'depletion', q: derived.sizeRatio, polymerReservoir: derived.polymerReservoir })
-        : derived.reducedB2 !== null
-          ? attractionToMapY(map, { kind: 'b2', value: derived.reducedB2 })
-          : null;
-    return y === null || !Number.isFinite(y) ? null : drawnY(map, y);
+    const y = mapYOf(map, derived);
+    return y === null ? null : drawnY(map, y);
   } catch {
     return null;
   }

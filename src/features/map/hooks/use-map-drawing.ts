@@ -1,6 +1,6 @@
 import { useMemo } from 'react';
 import { buildStateMap } from '@shared/physics/map/build-state-map';
-import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
+import { mapYOf } from '@shared/map-placement';
 import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
 import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
@@ -82,12 +82,11 @@ export function placePoints(map: StateMap, data: MapPoints, filter: { minAge: nu
       if (cache.has(cacheKey)) return cache.get(cacheKey)!;
       let y: number | null = null;
       try {
-        if (map.model.kind === 'depletion' && row.polymerReservoir !== null && q !== null) y = attractionToMapY(map, { kind: 'depletion', q, polymerReservoir: row.polymerReservoir });
-        else if (row.reducedB2 !== null) y = attractionToMapY(map, { kind: 'b2', value: row.reducedB2 });
+        y = mapYOf(map, { polymerReservoir: row.polymerReservoir, sizeRatio: q, reducedB2: row.reducedB2 });
       } catch {
         y = null;
       }
-      const drawn = y === null || !Number.isFinite(y) ? null : drawnY(map, y);
+      const drawn = y === null ? null : drawnY(map, y);
       cache.set(cacheKey, drawn);
       return drawn;
     },
