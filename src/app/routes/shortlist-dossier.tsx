@@ -11,6 +11,7 @@ import { RecipesMap } from '@/features/map/components/recipes-map';
 import { useProgramme } from '@/features/programmes';
 import { useRecipeObservations } from '@/features/recipes/api/get-recipe-observations';
 import { useShortlist } from '@/features/shortlists/api/get-shortlist';
+import { DossierShelfLife, DossierShelfLifeCell } from '@/features/shortlists/components/dossier-shelf-life';
 import { Wordmark } from '../layout/wordmark';
 
 /**
@@ -66,7 +67,8 @@ export function ShortlistDossierRoute() {
               <th className="py-1.5 pr-2 text-right">φ</th>
               <th className="py-1.5 pr-2 text-right">B2*</th>
               <th className="py-1.5 pr-2">Predicted</th>
-              <th className="py-1.5 text-right">Margin</th>
+              <th className="py-1.5 pr-2 text-right">Margin</th>
+              <th className="py-1.5">Shelf life on the bench</th>
             </tr>
           </thead>
           <tbody>
@@ -80,7 +82,10 @@ export function ShortlistDossierRoute() {
                 <td className="py-1.5 pr-2">
                   <StateBadge state={item.recipe.derived.predictedState} />
                 </td>
-                <td className="py-1.5 text-right tabular-nums">{formatNumber(item.recipe.derived.margin, 2)}</td>
+                <td className="py-1.5 pr-2 text-right tabular-nums">{formatNumber(item.recipe.derived.margin, 2)}</td>
+                <td className="py-1.5">
+                  <SummaryShelfLife recipeId={item.recipeId} />
+                </td>
               </tr>
             ))}
           </tbody>
@@ -145,6 +150,7 @@ function DossierRecipe({ item }: { item: ShortlistItemView }) {
           </div>
         ))}
       </dl>
+      <DossierShelfLife checks={observations.data} />
       <p className="mt-3 text-xs font-semibold uppercase tracking-wide text-ink-soft">Bench evidence</p>
       {observations.isPending ? (
         <p className="text-sm">Loading…</p>
@@ -163,6 +169,12 @@ function DossierRecipe({ item }: { item: ShortlistItemView }) {
       )}
     </section>
   );
+}
+
+/** The summary's shelf-life cell; the recipe's checks come from the same query as its section below. */
+function SummaryShelfLife({ recipeId }: { recipeId: number }) {
+  const observations = useRecipeObservations(recipeId);
+  return observations.isError ? <span className="text-ink-soft">could not load the checks</span> : <DossierShelfLifeCell checks={observations.data} />;
 }
 
 function History({ shortlist }: { shortlist: ShortlistView }) {
