@@ -7,6 +7,7 @@ import {
   csPressure,
   csPressureDerivative,
 } from '../hard-spheres/hard-sphere-branches';
+import { brentRoot } from '../numerics/brent-root';
 import type { PhaseBranch } from '../numerics/two-phase-coexistence';
 import { freeVolumeTermsInto, type FreeVolumeTerms } from './free-volume-fraction';
 
@@ -45,4 +46,18 @@ class FreeVolumeBranch implements PhaseBranch {
 export function freeVolumeBranch(kind: 'fluid' | 'solid', q: number, polymerReservoir: number, low: number, high: number): PhaseBranch {
   const top = kind === 'solid' ? Math.min(high, FCC_CLOSE_PACKING * (1 - 1e-12)) : high;
   return new FreeVolumeBranch(kind === 'solid', q, polymerReservoir, low, top);
+}
+
+/** Lowest φ used for the crystal branch (the crystal always coexists above melting, 0.5424). */
+export const FREE_VOLUME_SOLID_LOW = 0.5;
+
+/**
+ * The crystal branch from max(0.5, the φ where its own dp̃/dφ turns positive) to close packing:
+ * at small q the polymer term makes the crystal mechanically unstable at lower φ. Internal.
+ */
+export function freeVolumeSolidBranch(q: number, polymerReservoir: number): PhaseBranch {
+  const trial = freeVolumeBranch('solid', q, polymerReservoir, FREE_VOLUME_SOLID_LOW, 1);
+  if (trial.pressureDerivative(FREE_VOLUME_SOLID_LOW) > 0) return trial;
+  const onset = brentRoot((phi) => trial.pressureDerivative(phi), FREE_VOLUME_SOLID_LOW, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
+  return freeVolumeBranch('solid', q, polymerReservoir, (onset ?? FREE_VOLUME_SOLID_LOW) * (1 + 1e-9), 1);
 }

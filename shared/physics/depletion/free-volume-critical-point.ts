@@ -3,7 +3,7 @@ import { branchAtChemicalPotential } from '../numerics/two-phase-coexistence';
 import { LIQUID_BRANCH_LIMIT } from '../hard-spheres/hard-sphere-branches';
 import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { freeVolumeBranch } from './free-volume-branches';
-import { freeVolumeSolidBranch } from './free-volume-fluid-solid-coexistence';
+import { freeVolumeSolidBranch } from './free-volume-branches';
 import { requireSizeRatio } from './free-volume-limits';
 import { freeVolumeSpinodalPolymer } from './free-volume-spinodal-polymer';
 

@@ -1,12 +1,8 @@
-import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { brentRoot } from '../numerics/brent-root';
 import { envelopeCoexistence, type PhaseBranch } from '../numerics/two-phase-coexistence';
-import { freeVolumeBranch } from './free-volume-branches';
+import { freeVolumeSolidBranch } from './free-volume-branches';
 import { freeVolumeFluidPieces } from './free-volume-fluid-pieces';
 import { requireReservoirPolymer, requireSizeRatio } from './free-volume-limits';
-
-/** Lowest φ used for the crystal branch (the crystal always coexists above melting, 0.5424). */
-export const FREE_VOLUME_SOLID_LOW = 0.5;
 
 /**
  * Stable fluid–crystal coexistence of colloid + ideal polymer in free-volume theory at
@@ -67,15 +63,4 @@ export function freeVolumeFluidSolidUnchecked(q: number, polymerReservoir: numbe
     chemicalPotential: point.chemicalPotential,
     pressure: point.pressure,
   };
-}
-
-/**
- * The crystal branch from max(0.5, the φ where its own dp̃/dφ turns positive) to close packing:
- * at small q the polymer term makes the crystal mechanically unstable at lower φ. Internal.
- */
-export function freeVolumeSolidBranch(q: number, polymerReservoir: number): PhaseBranch {
-  const trial = freeVolumeBranch('solid', q, polymerReservoir, FREE_VOLUME_SOLID_LOW, 1);
-  if (trial.pressureDerivative(FREE_VOLUME_SOLID_LOW) > 0) return trial;
-  const onset = brentRoot((phi) => trial.pressureDerivative(phi), FREE_VOLUME_SOLID_LOW, FCC_CLOSE_PACKING * (1 - 1e-9), { absoluteTolerance: 1e-14 });
-  return freeVolumeBranch('solid', q, polymerReservoir, (onset ?? FREE_VOLUME_SOLID_LOW) * (1 + 1e-9), 1);
 }

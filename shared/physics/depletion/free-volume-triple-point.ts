@@ -3,7 +3,7 @@ import { brentRoot } from '../numerics/brent-root';
 import { branchAtChemicalPotential, twoBranchCoexistence } from '../numerics/two-phase-coexistence';
 import { freeVolumeCriticalPointUnchecked } from './free-volume-critical-point';
 import { freeVolumeFluidPieces } from './free-volume-fluid-pieces';
-import { freeVolumeSolidBranch } from './free-volume-fluid-solid-coexistence';
+import { freeVolumeSolidBranch } from './free-volume-branches';
 import { FREE_VOLUME_MAX_POLYMER, requireSizeRatio } from './free-volume-limits';
 
 export interface FreeVolumeTriplePoint {

@@ -1,6 +1,6 @@
 import { freeVolumeCriticalPointUnchecked } from '../depletion/free-volume-critical-point';
 import { freeVolumeFluidPieces } from '../depletion/free-volume-fluid-pieces';
-import { freeVolumeSolidBranch } from '../depletion/free-volume-fluid-solid-coexistence';
+import { freeVolumeSolidBranch } from '../depletion/free-volume-branches';
 import { baxterFluidBranch } from '../fluid-fluid/baxter-py-branch';
 import { baxterPYCriticalPoint } from '../fluid-fluid/baxter-py-critical-point';
 import { baxterBandUnchecked } from '../fluid-fluid/baxter-py-no-solution-band';
