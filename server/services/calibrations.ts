@@ -12,6 +12,7 @@ import type { HandlerContext } from '../http/route';
 import { Calibration, Observation, Recipe, User } from '../models';
 import { recipeInputOf } from '../models/recipe-shapes';
 import { requireProgramme } from './lookups';
+import { inOwnTransaction } from './own-transaction';
 import { adhocPrediction, programmeParameters } from './predictions';
 import { materialsOfRecipes, type LoadedMaterials } from './recipe-materials';
 
@@ -115,14 +116,7 @@ export async function fitProgrammeCalibration(ctx: Ctx, programmeId: number, inp
     if (error instanceof HeavyJobFailed && error.refused) throw refusal(new CalibrationRefused(error.refused.reason as CalibrationRefused['reason'], error.message, error.refused.counts as Record<string, number>));
     throw error;
   }
-  return ctx.deps.sequelize.transaction(async (transaction) => {
-    ctx.transaction = transaction;
-    try {
-      return await storeFit(ctx, programmeId, input, result);
-    } finally {
-      ctx.transaction = null;
-    }
-  });
+  return inOwnTransaction(ctx, () => storeFit(ctx, programmeId, input, result));
 }
 
 async function storeFit(ctx: Ctx, programmeId: number, input: CalibrationFitInput, result: CalibrationFit) {

@@ -29,6 +29,7 @@ import { buildMapPoints } from './map-points';
 import { programmeParameters } from './predictions';
 import { materialsOfRecipe } from './recipe-materials';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
+import { inOwnTransaction } from './own-transaction';
 import type { PlanJob } from './plan-compute';
 import { shelfLifeInput } from './shelf-life';
 
@@ -66,11 +67,11 @@ function physicsProblem(error: unknown): never {
  * composition re-derived exactly as a recipe (deriveRecipe on the recipe's cached map).
  */
 export async function runPlan(ctx: Ctx, input: PlanRequest) {
-  const programme = await requireProgramme(input.programmeId, ctx.transaction);
+  const programme = await requireProgramme(input.programmeId, null);
   if (programme.archivedAt) throw badRequest('programmeId: the programme is archived', 'programmeId');
-  const materials = await materialsOfRecipe(input, ctx.transaction);
-  const { parameters, calibration } = await programmeParameters(input.programmeId, ctx.transaction);
-  const uncertainty = await boundaryUncertainty(calibration, ctx.transaction);
+  const materials = await materialsOfRecipe(input, null);
+  const { parameters, calibration } = await programmeParameters(input.programmeId, null);
+  const uncertainty = await boundaryUncertainty(calibration, null);
   const kind = input.attraction.source === 'depletion' ? 'polymer' : 'salt';
   const prices = {
     particles: price(input.prices?.particles, materials.particle.pricePerKg),
@@ -99,16 +100,22 @@ export async function runPlan(ctx: Ctx, input: PlanRequest) {
     throw error;
   }
   const title = input.title ?? `${STATE_LABELS[input.targetState]}: ${materials.particle.name} with ${(materials.depletant ?? materials.salt)!.name}`.slice(0, 120);
-  const created = await Plan.create(
-    {
-      programmeId: programme.id, title, targetState: input.targetState, attractionSource: input.attraction.source, inputs: input,
-      modelVersion: PHYSICS_MODEL_VERSION, calibrationId: calibration?.id ?? null, outcome: stored,
-      candidateCount: stored.outcome.candidates.length, feasible: stored.outcome.feasible, createdBy: ctx.user!.id,
-    },
-    { transaction: ctx.transaction },
-  );
-  await ctx.audit({ action: 'plan.created', entityType: 'plan', entityId: created.id, details: { programmeId: programme.id, targetState: input.targetState, candidates: stored.outcome.candidates.length, experiments: stored.outcome.experiments.items.length, calibrationId: calibration?.id ?? null } });
-  return loadPlan(created.id, ctx.transaction);
+  // The route is not transactional (the worker may run for seconds): the plan is written in a
+  // transaction of its own once it is computed.
+  return inOwnTransaction(ctx, async (transaction) => {
+    // Archived while the worker ran: nothing new goes into an archived programme.
+    if ((await requireProgramme(input.programmeId, transaction)).archivedAt) throw badRequest('programmeId: the programme is archived', 'programmeId');
+    const created = await Plan.create(
+      {
+        programmeId: programme.id, title, targetState: input.targetState, attractionSource: input.attraction.source, inputs: input,
+        modelVersion: PHYSICS_MODEL_VERSION, calibrationId: calibration?.id ?? null, outcome: stored,
+        candidateCount: stored.outcome.candidates.length, feasible: stored.outcome.feasible, createdBy: ctx.user!.id,
+      },
+      { transaction },
+    );
+    await ctx.audit({ action: 'plan.created', entityType: 'plan', entityId: created.id, details: { programmeId: programme.id, targetState: input.targetState, candidates: stored.outcome.candidates.length, experiments: stored.outcome.experiments.items.length, calibrationId: calibration?.id ?? null } });
+    return loadPlan(created.id, transaction);
+  });
 }
 
 /** A plan with its author and the recipes made from it. */

@@ -36,6 +36,8 @@ export const planRoutes = [
     access: 'plans.write',
     summary: 'Run the planner for a target state and store the plan',
     body: planInputSchema,
+    // The planner runs outside any transaction; the service writes the plan in one of its own.
+    transactional: false,
     async handler(ctx) {
       return { status: 201, body: { plan: presentPlan(await runPlan(ctx, ctx.body)) } };
     },
