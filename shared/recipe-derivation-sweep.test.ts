@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { highestGlassPhi, PhysicsArgumentError, SHORT_RANGE_LIMIT, type StateMap } from './physics';
 import { deriveRecipe, recipeFieldOf, type RecipeMaterials } from './recipe-derivation';
 import type { RecipeInput } from './schemas/recipes';
-import type { RecipeDerived } from './views/team-data';
+import type { RecipeDerived } from './views/recipe';
 import { PREDICTED_STATES } from './states';
 
 // A property-style sweep over realistic recipes, derived exactly as the server does on save

@@ -4,7 +4,8 @@ import { recipeAttraction } from './physics/recipe/recipe-attraction';
 import { cachedStateMap } from './state-map-cache';
 import type { RecipeInput as PhysicsRecipeInput } from './physics/recipe/recipe-types';
 import type { RecipeInput } from './schemas/recipes';
-import type { DepletantView, ParticleView, RecipeDerived, SaltView, SolventView } from './views/team-data';
+import type { DepletantView, ParticleView, SaltView, SolventView } from './views/materials';
+import type { RecipeDerived } from './views/recipe';
 
 /** The library rows a recipe refers to (only the fields the physics reads). */
 export interface RecipeMaterials {

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import type { ImportReport } from '../../shared/views/team-data';
+import type { ImportReport } from '../../shared/views/observation';
 
 /** One CSV import, stored in the import's own transaction, so a retried key finds it. */
 export class ImportBatch extends Model<InferAttributes<ImportBatch>, InferCreationAttributes<ImportBatch>> {

@@ -1,5 +1,5 @@
 import type { RecipeAttraction, RecipeInput } from '../../shared/schemas/recipes';
-import type { RecipeSnapshot } from '../../shared/views/team-data';
+import type { RecipeSnapshot } from '../../shared/views/recipe';
 import type { Recipe } from './recipe';
 
 /**

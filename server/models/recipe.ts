@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { PREDICTED_STATES, type PredictedState } from '../../shared/states';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 
 export type RecipeSource = 'depletion' | 'salt' | 'direct' | 'none';
 

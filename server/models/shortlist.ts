@@ -1,6 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import { GOAL_STATES, SHORTLIST_STATUSES, type GoalState, type ShortlistStatus } from '../../shared/states';
-import type { RecipeSnapshot } from '../../shared/views/team-data';
+import type { RecipeSnapshot } from '../../shared/views/recipe';
 
 export class Shortlist extends Model<InferAttributes<Shortlist>, InferCreationAttributes<Shortlist>> {
   declare id: CreationOptional<number>;

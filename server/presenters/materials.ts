@@ -1,5 +1,5 @@
 import type { Depletant, ParticleSystem, Salt, Solvent } from '../models';
-import type { DepletantView, ParticleView, SaltView, SolventView } from '../../shared/views/team-data';
+import type { DepletantView, ParticleView, SaltView, SolventView } from '../../shared/views/materials';
 
 const base = (m: { id: number; name: string; pricePerKg: number | null; notes: string | null; archivedAt: Date | null; updatedAt: Date }) => ({
   id: m.id,

@@ -1,5 +1,5 @@
 import { observationAgrees } from '../../shared/states';
-import type { AttachmentView, ObservationView } from '../../shared/views/team-data';
+import type { AttachmentView, ObservationView } from '../../shared/views/observation';
 import type { Attachment, Observation, Recipe, User } from '../models';
 
 type LoadedObservation = Observation & { recipe?: Recipe | null; observer?: User | null; attachments?: (Attachment & { uploader?: User | null })[] };

@@ -1,5 +1,5 @@
 import type { Programme } from '../models';
-import type { ProgrammeView } from '../../shared/views/team-data';
+import type { ProgrammeView } from '../../shared/views/programme';
 
 export function presentProgramme(p: Programme, counts: { recipes: number; observations: number } = { recipes: 0, observations: 0 }): ProgrammeView {
   return {

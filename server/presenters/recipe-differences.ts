@@ -1,6 +1,6 @@
 import type { Recipe } from '../models';
 import { snapshotOf } from '../models/recipe-shapes';
-import type { RecipeDifference, RecipeSnapshot } from '../../shared/views/team-data';
+import type { RecipeDifference, RecipeSnapshot } from '../../shared/views/recipe';
 
 type Value = string | number | null;
 type Reader = [field: string, label: string, read: (s: RecipeSnapshot) => Value];

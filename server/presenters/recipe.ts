@@ -1,5 +1,5 @@
 import type { Recipe, User } from '../models';
-import type { RecipeView } from '../../shared/views/team-data';
+import type { RecipeView } from '../../shared/views/recipe';
 import { storedAttraction } from '../models/recipe-shapes';
 
 /** Kept for server/seed/demo-scenario.ts; the function lives with the recipe row's shapes. */

@@ -1,5 +1,5 @@
 import type { Recipe, Shortlist, ShortlistEvent, ShortlistItem, User } from '../models';
-import type { ShortlistItemView, ShortlistView } from '../../shared/views/team-data';
+import type { ShortlistItemView, ShortlistView } from '../../shared/views/shortlist';
 import { differencesSince } from './recipe-differences';
 
 type Loaded = Shortlist & {

@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import { IMPORT_MAX_ROWS } from '../../shared/schemas/observations';
-import type { ImportRowProblem } from '../../shared/views/team-data';
+import type { ImportRowProblem } from '../../shared/views/observation';
 import { unescapeCell } from './csv-cells';
 
 /**

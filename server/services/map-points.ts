@@ -3,7 +3,8 @@ import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
 import type { ObservedState, PredictedState } from '../../shared/states';
 import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '../../shared/views/map-points';
-import type { MapPoints, RecipeDerived } from '../../shared/views/team-data';
+import type { MapPoints } from '../../shared/views/map-points';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import { onProgrammeWritten } from '../http/write-events';
 
 const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : 4 * (1 - b2));

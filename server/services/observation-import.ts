@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS, observationFields } from '../../shared/schemas/observations';
-import type { ImportReport, ImportRowProblem } from '../../shared/views/team-data';
+import type { ImportReport, ImportRowProblem } from '../../shared/views/observation';
 import type { HandlerContext } from '../http/route';
 import { ImportBatch, Observation, Programme, Recipe } from '../models';
 import { runInWorker } from './heavy-jobs';

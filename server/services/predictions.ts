@@ -4,7 +4,7 @@ import { cachedStateMap } from '../../shared/state-map-cache';
 import { deriveRecipe, recipeFieldOf } from '../../shared/recipe-derivation';
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import type { PredictedState } from '../../shared/states';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import { badRequest } from '../errors';
 import { Calibration, Programme } from '../models';
 import { materialsOfRecipe } from './recipe-materials';

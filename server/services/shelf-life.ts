@@ -6,7 +6,7 @@ import { survivalRecordsFromChecks, type SampleCheck } from '../../shared/shelf-
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { ObservedState } from '../../shared/states';
 import type { ProgrammeShelfLifeView } from '../../shared/views/shelf-life';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import { notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { runInWorker, withHeavyJobSlot } from './heavy-jobs';

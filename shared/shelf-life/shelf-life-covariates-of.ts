@@ -1,4 +1,4 @@
-import type { RecipeDerived } from '../views/team-data';
+import type { RecipeDerived } from '../views/recipe';
 import type { ShelfLifeCovariates } from './shelf-life-model';
 
 /**

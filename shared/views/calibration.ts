@@ -1,5 +1,5 @@
 import type { CalibrationFit, CalibrationParameter, Estimate, VerdictKind } from '../calibration/types';
-import type { PersonRef } from './team-data';
+import type { PersonRef } from './person';
 
 /** A calibration's life: proposed when fitted; accepted; superseded by a later one or withdrawn. */
 export const CALIBRATION_STATUSES = ['proposed', 'accepted', 'superseded', 'withdrawn'] as const;

@@ -1,5 +1,24 @@
 import { observationAgrees, type ObservedState, type PredictedState } from '../states';
-import type { MapPoints } from './team-data';
+
+/**
+ * Map overlay for a programme, columnar so 10,000 points stay small. Recipes carry their
+ * coordinates in every attraction description the map can show (null where not defined).
+ * An observation of a recipe is sent as its first four columns only (id, recipe, observed state,
+ * age): it sits where its recipe sits and shares its prediction and code. Only an ad-hoc
+ * observation (recipeId null) carries every column. `decodeMapObservations` rebuilds the full
+ * records.
+ */
+export interface MapPoints {
+  programmeId: number;
+  recipes: {
+    columns: readonly ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'];
+    rows: (string | number | null)[][];
+  };
+  observations: {
+    columns: readonly ['id', 'recipeId', 'observedState', 'ageDays', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'predictedState'];
+    rows: (string | number | null)[][];
+  };
+}
 
 export const MAP_RECIPE_COLUMNS = ['id', 'code', 'name', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'sizeRatio', 'predictedState', 'margin'] as const;
 export const MAP_OBSERVATION_COLUMNS = ['id', 'recipeId', 'observedState', 'ageDays', 'phi', 'reducedB2', 'inverseTau', 'contactEnergyKT', 'polymerReservoir', 'predictedState'] as const;

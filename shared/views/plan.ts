@@ -3,7 +3,8 @@ import type { ClassifierParameters, MapModel } from '../physics';
 import type { BoundaryUncertainty, CostPerLitre, FeasibleWindow, NearestEvidence, PlanAdvice } from '../planning/types';
 import type { PlanRequest } from '../schemas/plans';
 import type { GoalState, PredictedState } from '../states';
-import type { PersonRef, RecipeDerived } from './team-data';
+import type { PersonRef } from './person';
+import type { RecipeDerived } from './recipe';
 
 /** A recipe made from a plan: a chosen candidate or a proposed experiment. */
 export interface PlanRecipeRef {

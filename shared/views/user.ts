@@ -11,6 +11,3 @@ export interface UserView {
   lastSignInAt: string | null;
   createdAt: string;
 }
-
-/** Kept here for the client's imports; the type lives in ./page. */
-export type { Page } from './page';

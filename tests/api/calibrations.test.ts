@@ -6,7 +6,8 @@ import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivati
 import type { RecipeInput } from '../../shared/schemas/recipes';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { CalibrationListView, CalibrationView } from '../../shared/views/calibration';
-import type { ObservationView, RecipeView } from '../../shared/views/team-data';
+import type { ObservationView } from '../../shared/views/observation';
+import type { RecipeView } from '../../shared/views/recipe';
 import { AuditEvent, Calibration, ParticleSystem, Recipe, type Programme } from '../../server/models';
 import { presentParticle, presentSolvent } from '../../server/presenters/materials';
 import { adhocPrediction } from '../../server/services/predictions';

@@ -6,7 +6,9 @@ import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivati
 import type { PlanInput } from '../../shared/schemas/plans';
 import { cachedStateMap } from '../../shared/state-map-cache';
 import type { PlanSummaryView, PlanView } from '../../shared/views/plan';
-import type { MapPoints, RecipeView, ShortlistView } from '../../shared/views/team-data';
+import type { MapPoints } from '../../shared/views/map-points';
+import type { RecipeView } from '../../shared/views/recipe';
+import type { ShortlistView } from '../../shared/views/shortlist';
 import { AuditEvent, Calibration, ParticleSystem, Plan, Recipe, type Programme } from '../../server/models';
 import { presentDepletant, presentParticle, presentSalt, presentSolvent } from '../../server/presenters/materials';
 import { agentsForEveryRole } from '../support/builders';

@@ -3,7 +3,7 @@ import request from 'supertest';
 import { seededRandom } from '../../shared/seeded-random';
 import { fitShelfLifeModel } from '../../shared/shelf-life';
 import type { ProgrammeShelfLifeView } from '../../shared/views/shelf-life';
-import type { RecipeView } from '../../shared/views/team-data';
+import type { RecipeView } from '../../shared/views/recipe';
 import { agentsForEveryRole } from '../support/builders';
 import { buildLibrary, buildProgramme, recipeInput, type Library } from '../support/team-builders';
 import { startTestStack, type TestStack } from '../support/test-stack';

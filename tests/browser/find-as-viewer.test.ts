@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { STATE_DESCRIPTIONS, STATE_LABELS, type PredictedState } from '../../shared/states';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import type { Programme } from '../../server/models';
 import { seriousAccessibilityViolations } from '../support/axe';
 import { openCheckedPage, screenshot, signInThroughForm } from '../support/browser';

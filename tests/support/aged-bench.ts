@@ -2,7 +2,7 @@ import { expect } from 'vitest';
 import type request from 'supertest';
 import type { Programme } from '../../server/models';
 import { seededRandom } from '../../shared/seeded-random';
-import type { RecipeView } from '../../shared/views/team-data';
+import type { RecipeView } from '../../shared/views/recipe';
 import { recipeInput, type Library } from './team-builders';
 
 type Agent = ReturnType<typeof request.agent>;

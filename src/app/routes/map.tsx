@@ -23,7 +23,8 @@ import { placePoints, useStateMapDrawing } from '@/features/map/hooks/use-map-dr
 import { ProgrammeGate } from '@/features/programmes/components/programme-gate';
 import { ProgrammePicker } from '@/features/programmes/components/programme-picker';
 import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
-import type { MapPoints, ProgrammeView } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
+import type { ProgrammeView } from '@shared/views/programme';
 import { formatDate } from '@/lib/format';
 import { useUrlParams } from '@/lib/use-url-params';
 import { decodeMapRecipes } from '@shared/views/map-points';

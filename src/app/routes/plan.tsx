@@ -1,7 +1,7 @@
 import { can } from '@shared/permissions';
 import { STATE_LABELS } from '@shared/states';
 import type { PlanView } from '@shared/views/plan';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { Notice } from '@/components/ui/notice';
 import { Card, PageHeader } from '@/components/ui/page';
 import { EmptyState, ErrorState, Loading } from '@/components/ui/states';

@@ -1,6 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 import { STATE_LABELS } from '@shared/states';
-import type { ShortlistItemView, ShortlistView } from '@shared/views/team-data';
+import type { ShortlistItemView, ShortlistView } from '@shared/views/shortlist';
 import { Button } from '@/components/ui/button';
 import { StateBadge } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';

@@ -1,4 +1,4 @@
-import type { AttachmentView } from '@shared/views/team-data';
+import type { AttachmentView } from '@shared/views/observation';
 
 /** Where a browser fetches an attachment: inline for PNG and JPEG thumbnails, a download otherwise. */
 export const attachmentUrl = (attachment: Pick<AttachmentView, 'id'>, inline = false) => `/api/attachments/${attachment.id}${inline ? '?inline=true' : ''}`;

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ObservationInput } from '@shared/schemas/observations';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
 import { dueCheckKeys } from './due-check-keys';
 import { observationKeys } from './observation-keys';

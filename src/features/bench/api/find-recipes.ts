@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { RecipeView } from '@shared/views/team-data';
-import type { Page } from '@shared/views/user';
+import type { RecipeView } from '@shared/views/recipe';
+import type { Page } from '@shared/views/page';
 import { api, toQuery } from '@/lib/api-client';
 
 /** Keys under the recipes family, so a change to recipes anywhere refreshes this chooser too. */

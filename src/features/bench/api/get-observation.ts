@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
 import { observationKeys } from './observation-keys';
 

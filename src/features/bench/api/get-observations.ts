@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { ObservationView } from '@shared/views/team-data';
-import type { Page } from '@shared/views/user';
+import type { ObservationView } from '@shared/views/observation';
+import type { Page } from '@shared/views/page';
 import { api, toQuery } from '@/lib/api-client';
 import { observationKeys, type ObservationFilters } from './observation-keys';
 

@@ -1,4 +1,4 @@
-import type { ImportReport } from '@shared/views/team-data';
+import type { ImportReport } from '@shared/views/observation';
 import { ApiError } from '@/lib/api-client';
 
 export interface ImportAnswer {

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { checkFromDue, type DueCheckAnswer } from '@shared/check-schedules/check-from-due';
 import type { DueCheckView } from '@shared/views/check-schedules';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
 import { dueCheckKeys } from './due-check-keys';
 import { observationKeys } from './observation-keys';

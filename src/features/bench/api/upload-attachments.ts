@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AttachmentView } from '@shared/views/team-data';
+import type { AttachmentView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
 import { observationKeys } from './observation-keys';
 

@@ -1,5 +1,5 @@
 import { useRef, useState } from 'react';
-import type { AttachmentView } from '@shared/views/team-data';
+import type { AttachmentView } from '@shared/views/observation';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

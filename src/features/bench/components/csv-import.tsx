@@ -1,7 +1,7 @@
 import { useRef, useState } from 'react';
 import { IMPORT_COLUMNS, IMPORT_MAX_ROWS, REQUIRED_IMPORT_COLUMNS } from '@shared/schemas/observations';
 import { OBSERVATION_METHODS, OBSERVED_STATES } from '@shared/states';
-import type { ImportReport } from '@shared/views/team-data';
+import type { ImportReport } from '@shared/views/observation';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';

@@ -1,4 +1,4 @@
-import type { ImportRowProblem } from '@shared/views/team-data';
+import type { ImportRowProblem } from '@shared/views/observation';
 import { Table, Td, Th } from '@/components/ui/table';
 
 /** Every problem the check found, by row (the header is row 1, as in a spreadsheet) and column. */

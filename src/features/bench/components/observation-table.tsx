@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { METHOD_LABELS } from '@shared/states';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { StateBadge } from '@/components/ui/state-badge';
 import { Table, Td, Th } from '@/components/ui/table';
 import { formatDate, formatNumber } from '@/lib/format';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { useController, type Control } from 'react-hook-form';
 import { STATE_LABELS } from '@shared/states';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';
 import { useRecipeChoices } from '../api/find-recipes';

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { METHOD_LABELS, OBSERVATION_METHODS, OBSERVED_STATES, STATE_DESCRIPTIONS, STATE_LABELS } from '@shared/states';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';

@@ -1,5 +1,5 @@
 import { STATE_LABELS, type ObservedState } from '@shared/states';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { AgreementTick, StateName } from '@/components/ui/state-badge';
 import { formatDate, formatNumber } from '@/lib/format';

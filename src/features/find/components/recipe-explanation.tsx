@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { STATE_DESCRIPTIONS, STATE_LABELS } from '@shared/states';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { Card } from '@/components/ui/page';
 import { StateGlyph } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';

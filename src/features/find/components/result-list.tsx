@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { STATE_LABELS } from '@shared/states';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { EmptyState, ErrorState, Loading } from '@/components/ui/states';
 import { useRecipeSearch } from '../api/search-recipes';
 

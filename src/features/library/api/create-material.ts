@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MaterialKind } from '@shared/schemas/materials';
-import type { MaterialViews } from '@shared/views/team-data';
+import type { MaterialViews } from '@shared/views/materials';
 import { api } from '@/lib/api-client';
 import { materialKeys } from './material-keys';
 

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MaterialKind } from '@shared/schemas/materials';
-import type { MaterialViews } from '@shared/views/team-data';
+import type { MaterialViews } from '@shared/views/materials';
 import { api, toQuery } from '@/lib/api-client';
 import { materialKeys, type MaterialFilters } from './material-keys';
 

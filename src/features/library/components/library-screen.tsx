@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { MATERIAL_KINDS, type MaterialKind } from '@shared/schemas/materials';
-import type { MaterialViews } from '@shared/views/team-data';
+import type { MaterialViews } from '@shared/views/materials';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Card } from '@/components/ui/page';

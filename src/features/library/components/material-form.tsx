@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { MATERIAL_SCHEMAS, type MaterialKind } from '@shared/schemas/materials';
-import type { MaterialViews } from '@shared/views/team-data';
+import type { MaterialViews } from '@shared/views/materials';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';

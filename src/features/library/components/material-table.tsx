@@ -1,5 +1,5 @@
 import type { MaterialKind } from '@shared/schemas/materials';
-import type { MaterialViews } from '@shared/views/team-data';
+import type { MaterialViews } from '@shared/views/materials';
 import { Button } from '@/components/ui/button';
 import { Badge } from '@/components/ui/page';
 import { Table, Td, Th } from '@/components/ui/table';

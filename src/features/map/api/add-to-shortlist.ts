@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ShortlistView } from '@shared/views/team-data';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
 
 const REASON = 'Picked on the state map; give the reason before submitting.';

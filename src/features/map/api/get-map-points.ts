@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { MapPoints } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
 import { api } from '@/lib/api-client';
 
 export const mapPointKeys = {

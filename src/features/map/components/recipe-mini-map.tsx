@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import type { StateMap as PhysicsMap } from '@shared/physics/map/types';
 import type { ObservedState, PredictedState } from '@shared/states';
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { cachedStateMap } from '@shared/state-map-cache';
 import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { axisTop } from '../hooks/use-map-drawing';

@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import type { MapModel } from '@shared/physics/map/types';
 import { cachedStateMap } from '@shared/state-map-cache';
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { derivedDrawnY, drawingFromStateMap } from '../geometry/from-state-map';
 import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';

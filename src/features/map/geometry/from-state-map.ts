@@ -1,6 +1,6 @@
 import { mapYOf } from '@shared/map-placement';
 import type { MapBoundary, StateMap } from '@shared/physics/map/types';
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import type { MapDrawing, MapLine, XY } from './types';
 
 const TONE_OF: Record<MapBoundary['id'], MapLine['tone']> = {

@@ -1,6 +1,6 @@
 import type { ObservedState } from '@shared/states';
 import { decodeMapObservations, decodeMapRecipes } from '@shared/views/map-points';
-import type { MapPoints } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
 import type { MapPoint } from './types';
 
 /** The drawn y of a point from its coordinates, and the recipe it belongs to (null for ad-hoc samples). */

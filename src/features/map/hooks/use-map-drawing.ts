@@ -4,7 +4,7 @@ import { mapYOf } from '@shared/map-placement';
 import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
 import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
-import type { MapPoints } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
 import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
 import type { MapView } from '../geometry/map-view';
 import { projectPoints } from '../geometry/project-points';

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { LIMITS } from '@shared/limits';
-import type { ShortlistView } from '@shared/views/team-data';
-import type { Page } from '@shared/views/user';
+import type { ShortlistView } from '@shared/views/shortlist';
+import type { Page } from '@shared/views/page';
 import { api } from '@/lib/api-client';
 
 /** A programme's draft shortlists, which a plan's recipes may be added to. */

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { LIMITS } from '@shared/limits';
 import type { PlanSummaryView } from '@shared/views/plan';
-import type { Page } from '@shared/views/user';
+import type { Page } from '@shared/views/page';
 import { api } from '@/lib/api-client';
 import { planKeys } from './plan-keys';
 

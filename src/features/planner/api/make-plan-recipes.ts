@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PlanRecipesInput } from '@shared/schemas/plans';
-import type { RecipeView, ShortlistView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
 import { CHANGED_BY_PLAN_RECIPES, planKeys } from './plan-keys';
 

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PlanExperimentRecipesInput } from '@shared/schemas/plans';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { api } from '@/lib/api-client';
 import { CHANGED_BY_PLAN_RECIPES, planKeys } from './plan-keys';
 

@@ -4,7 +4,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { planInputSchema, PLAN_LIMITS, type PlanInput, type PlanRequest } from '@shared/schemas/plans';
 import { GOAL_STATES, type GoalState } from '@shared/states';
 import type { PlanView } from '@shared/views/plan';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProgrammeInput } from '@shared/schemas/programmes';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { api } from '@/lib/api-client';
 import { programmeKeys } from './programme-keys';
 

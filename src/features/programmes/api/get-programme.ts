@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { api } from '@/lib/api-client';
 import { programmeKeys } from './programme-keys';
 

@@ -4,7 +4,7 @@ import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
 import { programmeInputSchema } from '@shared/schemas/programmes';
 import { ATTRACTION_SOURCES, GOAL_STATES } from '@shared/states';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';

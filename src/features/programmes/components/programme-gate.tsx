@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { Card } from '@/components/ui/page';
 import { EmptyState, ErrorState, Loading } from '@/components/ui/states';
 import type { ProgrammeSelection } from '../hooks/use-programme-param';

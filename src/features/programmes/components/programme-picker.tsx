@@ -1,4 +1,4 @@
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { Field } from '@/components/ui/field';
 import { SelectInput } from '@/components/ui/inputs';
 

@@ -1,5 +1,5 @@
 import { useCallback } from 'react';
-import type { ProgrammeView } from '@shared/views/team-data';
+import type { ProgrammeView } from '@shared/views/programme';
 import { useProgrammes } from '../api/get-programmes';
 import { useUrlParams } from '@/lib/use-url-params';
 

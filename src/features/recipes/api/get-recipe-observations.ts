@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page } from '@shared/views/user';
-import type { ObservationView } from '@shared/views/team-data';
+import type { Page } from '@shared/views/page';
+import type { ObservationView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
 
 /** Every live observation of one recipe (for its timeline), oldest age first. */

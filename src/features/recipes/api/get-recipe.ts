@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { api } from '@/lib/api-client';
 import { recipeKeys } from './recipe-keys';
 

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page } from '@shared/views/user';
-import type { RecipeView } from '@shared/views/team-data';
+import type { Page } from '@shared/views/page';
+import type { RecipeView } from '@shared/views/recipe';
 import { api, toQuery } from '@/lib/api-client';
 import { recipeKeys, type RecipeFilters } from './recipe-keys';
 

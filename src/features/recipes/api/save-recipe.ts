@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { RecipeInput } from '@shared/schemas/recipes';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { api } from '@/lib/api-client';
 import { recipeKeys } from './recipe-keys';
 

@@ -1,4 +1,4 @@
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { StateBadge } from '@/components/ui/state-badge';
 import { formatNumber } from '@/lib/format';
 import { SymbolText } from '@/components/ui/symbol-text';

@@ -3,7 +3,7 @@ import type { StateMap } from '@shared/physics/map/types';
 import { PhysicsArgumentError } from '@shared/physics/validation/physics-argument-error';
 import { deriveRecipe, type RecipeMaterials } from '@shared/recipe-derivation';
 import { recipeInputSchema, type RecipeInput } from '@shared/schemas/recipes';
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { Notice } from '@/components/ui/notice';
 import { useRecipeMaterials } from '../api/get-materials';
 import { DerivedPanel } from './derived-panel';

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { MapPoints, RecipeDerived } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '@shared/views/map-points';
 import { nearbyEvidence } from './nearby-evidence';
 

@@ -1,5 +1,6 @@
 import { decodeMapObservations, decodeMapRecipes } from '@shared/views/map-points';
-import type { MapPoints, RecipeDerived } from '@shared/views/team-data';
+import type { MapPoints } from '@shared/views/map-points';
+import type { RecipeDerived } from '@shared/views/recipe';
 
 export interface NearbyEvidence {
   recipes: number;

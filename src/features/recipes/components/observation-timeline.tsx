@@ -1,5 +1,5 @@
 import { STATE_LABELS } from '@shared/states';
-import type { ObservationView } from '@shared/views/team-data';
+import type { ObservationView } from '@shared/views/observation';
 import { StateGlyph } from '@/components/ui/state-badge';
 import { EmptyState } from '@/components/ui/states';
 import { formatDate } from '@/lib/format';

@@ -1,4 +1,4 @@
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { formatNumber } from '@/lib/format';
 import { useRecipeMaterials } from '../api/get-materials';
 

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import { PREDICTED_STATES, type PredictedState } from '@shared/states';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { RecipeDerived } from '@shared/views/team-data';
+import type { RecipeDerived } from '@shared/views/recipe';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/inputs';
 import { formatNumber } from '@/lib/format';

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import type { StateMap } from '@shared/physics/map/types';
 import { recipeStateMap } from '@shared/recipe-derivation';
 import type { RecipeInput } from '@shared/schemas/recipes';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { useRecipeMaterials } from '../api/get-materials';
 
 /** A stored recipe as the editor's input (what PUT /api/recipes/:id takes). */

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { LIMITS } from '@shared/limits';
-import type { RecipeView } from '@shared/views/team-data';
-import type { Page } from '@shared/views/user';
+import type { RecipeView } from '@shared/views/recipe';
+import type { Page } from '@shared/views/page';
 import { api, toQuery } from '@/lib/api-client';
 
 /** Under the recipes family, so a recipe saved anywhere refreshes the shortlist form's choices. */

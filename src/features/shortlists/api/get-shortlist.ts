@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ShortlistView } from '@shared/views/team-data';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
 import { shortlistKeys } from './shortlist-keys';
 

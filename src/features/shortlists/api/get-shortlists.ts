@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { ShortlistView } from '@shared/views/team-data';
-import type { Page } from '@shared/views/user';
+import type { ShortlistView } from '@shared/views/shortlist';
+import type { Page } from '@shared/views/page';
 import { LIMITS } from '@shared/limits';
 import { api, toQuery } from '@/lib/api-client';
 import { shortlistKeys, type ShortlistFilters } from './shortlist-keys';

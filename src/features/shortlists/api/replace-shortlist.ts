@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ShortlistInput } from '@shared/schemas/shortlists';
-import type { ShortlistView } from '@shared/views/team-data';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
 import { shortlistKeys } from './shortlist-keys';
 

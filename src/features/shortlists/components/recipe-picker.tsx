@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { STATE_LABELS } from '@shared/states';
-import type { RecipeView } from '@shared/views/team-data';
+import type { RecipeView } from '@shared/views/recipe';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/inputs';

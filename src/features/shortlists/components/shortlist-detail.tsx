@@ -2,7 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import type { Role } from '@shared/roles';
 import { STATE_LABELS } from '@shared/states';
-import type { ShortlistView } from '@shared/views/team-data';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { Card } from '@/components/ui/page';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { formatDateTime } from '@/lib/format';

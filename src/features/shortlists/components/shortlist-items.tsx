@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { STATE_LABELS, type GoalState, type ShortlistStatus } from '@shared/states';
-import type { RecipeDifference, ShortlistItemView } from '@shared/views/team-data';
+import type { RecipeDifference } from '@shared/views/recipe';
+import type { ShortlistItemView } from '@shared/views/shortlist';
 import { Badge } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { StateBadge } from '@/components/ui/state-badge';

@@ -1,6 +1,6 @@
 import { useId, useState } from 'react';
 import { shortlistDecisionSchema, shortlistReturnSchema } from '@shared/schemas/shortlists';
-import type { ShortlistView } from '@shared/views/team-data';
+import type { ShortlistView } from '@shared/views/shortlist';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { TextArea } from '@/components/ui/inputs';

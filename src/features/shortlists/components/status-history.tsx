@@ -1,4 +1,4 @@
-import type { ShortlistEventView } from '@shared/views/team-data';
+import type { ShortlistEventView } from '@shared/views/shortlist';
 import { formatDateTime } from '@/lib/format';
 import { STATUS_LABELS } from './shortlist-status';
 

@@ -1,5 +1,5 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page } from '@shared/views/user';
+import type { Page } from '@shared/views/page';
 import { api, toQuery } from '@/lib/api-client';
 import { teamKeys } from './team-keys';
 

@@ -1,5 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page, UserView } from '@shared/views/user';
+import type { Page } from '@shared/views/page';
+import type { UserView } from '@shared/views/user';
 import { api } from '@/lib/api-client';
 import { teamKeys } from './team-keys';
 
