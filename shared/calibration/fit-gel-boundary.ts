@@ -1,5 +1,5 @@
 import { invertSymmetric, logisticRegression, type LogisticFit } from '../statistics/logistic-regression';
-import { crossingPoint } from '../statistics/ratio-interval';
+import { crossingPoint } from '../statistics/crossing-point';
 import { CalibrationRefused } from './calibration-refused';
 import { firthLogisticRegression } from './firth-logistic-regression';
 import { gelBoundaryB2 } from './gel-boundary-b2';

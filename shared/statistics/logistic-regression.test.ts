@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { seededRandom } from '../seeded-random';
 import { kFoldSplits } from './k-fold';
 import { logisticRegression } from './logistic-regression';
-import { crossingPoint } from './ratio-interval';
+import { crossingPoint } from './crossing-point';
 
 // Space-shuttle O-ring data, 23 launches before 1986: launch temperature (°F) and whether any
 // O-ring was damaged. Dalal, Fowlkes & Hoadley, J. Am. Stat. Assoc. 84, 945 (1989), Table 1.
