@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { IMPORT_MAX_ROWS } from '../../shared/schemas/observations';
 import type { ImportRowProblem } from '../../shared/views/observation';
-import { unescapeCell } from './csv-cells';
+import { unescapeCell } from '../../shared/csv-cells';
 
 /**
  * A CSV read into records keyed by its (lower-cased) header, or the one problem that stops it.

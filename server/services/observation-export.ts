@@ -6,7 +6,7 @@ import { Op, type WhereOptions } from 'sequelize';
 import { IMPORT_COLUMNS, type ObservationListQuery } from '../../shared/schemas/observations';
 import { observationAgrees, type ObservedState, type PredictedState } from '../../shared/states';
 import { Observation, Recipe, User } from '../models';
-import { escapeCell } from './csv-cells';
+import { escapeCell } from '../../shared/csv-cells';
 import { observationWhere } from './observations';
 
 /**

@@ -1,5 +1,6 @@
 import { Op, type Transaction } from 'sequelize';
 import { can } from '../../shared/permissions';
+import { isAuthorOrAdmin } from '../../shared/shortlist-moves';
 import { SHORTLIST_TRANSITIONS, type ShortlistStatus } from '../../shared/states';
 import type { ShortlistInput, ShortlistListQuery } from '../../shared/schemas/shortlists';
 import { badRequest, conflict, forbidden, notFound } from '../errors';
@@ -79,7 +80,7 @@ async function writeItems(shortlistId: number, input: ShortlistInput, transactio
 
 /** Only the author or an administrator changes a shortlist's content or sends it on. */
 function requireAuthorOrAdmin(ctx: Ctx, shortlist: Shortlist) {
-  if (shortlist.authorId !== ctx.user!.id && ctx.user!.role !== 'admin') throw forbidden('Only the author or an administrator may change this shortlist');
+  if (!isAuthorOrAdmin(ctx.user!, shortlist.authorId)) throw forbidden('Only the author or an administrator may change this shortlist');
 }
 
 export async function createShortlist(ctx: Ctx, input: ShortlistInput) {

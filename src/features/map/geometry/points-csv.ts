@@ -1,12 +1,9 @@
+import { escapeCell } from '@shared/csv-cells';
 import type { MapPoint } from './types';
 
-const FORMULA = /^[=+\-@\t\r]/;
-
-/** One CSV cell: quoted when needed, and a text cell a spreadsheet would run made inert. */
+/** One CSV cell: a text cell a spreadsheet would run made inert (escapeCell), quoted when needed. */
 function cell(value: string | number | boolean | null): string {
-  if (value === null) return '';
-  if (typeof value !== 'string') return String(value);
-  const text = FORMULA.test(value) ? `'${value}` : value;
+  const text = escapeCell(value);
   return /[",\n\r]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }
 

@@ -7,7 +7,7 @@ import { Card } from '@/components/ui/page';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { formatDateTime } from '@/lib/format';
 import { useShortlist } from '../api/get-shortlist';
-import { allowedMoves, anyMove } from '../lib/allowed-moves';
+import { allowedMoves, anyMove } from '@shared/shortlist-moves';
 import { ShortlistForm } from './shortlist-form';
 import { ShortlistItems } from './shortlist-items';
 import { ShortlistMoves } from './shortlist-moves';

@@ -11,7 +11,7 @@ import { useArchiveShortlist } from '../api/archive-shortlist';
 import { useReopenShortlist } from '../api/reopen-shortlist';
 import { useReturnShortlist } from '../api/return-shortlist';
 import { useSubmitShortlist } from '../api/submit-shortlist';
-import type { AllowedMoves } from '../lib/allowed-moves';
+import type { AllowedMoves } from '@shared/shortlist-moves';
 
 const messageOf = (error: unknown) => (error instanceof ApiError ? error.message : 'The change was not saved. Try again.');
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { allowedMoves } from './allowed-moves';
+import { allowedMoves } from './shortlist-moves';
 
 const author = { id: 1, role: 'formulator' as const };
 const otherFormulator = { id: 2, role: 'formulator' as const };

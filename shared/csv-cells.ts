@@ -2,7 +2,8 @@
  * Spreadsheet formula injection: a cell that starts with = + - @ (or a tab or carriage
  * return) is run as a formula by common spreadsheet programs. Gelwright stores such cells
  * as plain text and, on export, prefixes them with an apostrophe so they open as text.
- * (OWASP, "CSV Injection"; common practice.)
+ * (OWASP, "CSV Injection"; common practice.) Shared by the server's import and export and the
+ * map's CSV download.
  */
 const FORMULA_START = /^[=+\-@\t\r]/;
 
