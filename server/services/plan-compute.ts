@@ -19,6 +19,7 @@ import type { MapPoints } from '../../shared/views/team-data';
 import type { PlanPrice } from '../../shared/views/plan';
 import type { RecipeDerived } from '../../shared/views/team-data';
 import type { StoredPlanOutcome } from '../models/plan';
+import { programmeShelfLifeModel, shelfLifeCovariatesOf, shelfLifeRequestNote, shelfLifeVerdict, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 
 /**
  * The planner's computation, without the database: what runPlan read (materials as plain rows,
@@ -33,6 +34,8 @@ export interface PlanJob {
   uncertainty: BoundaryUncertainty;
   points: MapPoints;
   prices: { particles: PlanPrice; solvent: PlanPrice; polymer: PlanPrice | null; salt: PlanPrice | null };
+  /** The programme's recipes and bench samples for the shelf-life column (server/services/shelf-life.ts shelfLifeInput). */
+  shelfLife: { recipes: ShelfLifeRecipeInput[]; samples: ShelfLifeSampleInput[] };
 }
 
 /** A physics problem of the request, with the form field it belongs to. */
@@ -151,6 +154,13 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
   } catch (error) {
     physicsProblem(error);
   }
+  // Shelf life: the programme's Cox model on each listed candidate. With "stays a gel for at least
+  // N days", candidates predicted to fall short keep their place among themselves but follow those
+  // that meet it (or cannot be judged); a refused model leaves the ranking as it was and says so.
+  const minimumDays = input.minShelfLifeDays ?? null;
+  const shelfModel = programmeShelfLifeModel(job.shelfLife.recipes, job.shelfLife.samples);
+  const judged = outcome.candidates.map((c) => ({ c, shelfLife: shelfModel.status === 'fitted' ? shelfLifeVerdict(shelfModel, shelfLifeCovariatesOf(c.verified!), minimumDays) : null }));
+  const ranked = minimumDays === null ? judged : [...judged.filter((j) => j.shelfLife?.meets !== false), ...judged.filter((j) => j.shelfLife?.meets === false)];
   const stored: StoredPlanOutcome = {
     materials: { particle: materials.particle.name, solvent: materials.solvent.name, depletant: materials.depletant?.name ?? null, salt: materials.salt?.name ?? null },
     prices,
@@ -160,9 +170,9 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
     map: { model: space.map.model, parameters: resolveClassifierParameters(parameters as Partial<ClassifierParameters> | undefined), polydispersity: materials.particle.polydispersityPct, yLabel: space.map.y.label },
     outcome: {
       feasible: outcome.candidates.length > 0,
-      candidates: outcome.candidates.map((c, index) => ({
+      candidates: ranked.map(({ c, shelfLife }, index) => ({
         index, phi: c.phi, level: c.level, predictedState: c.state, margin: c.margin, nearestBoundary: c.nearestBoundary, mapY: c.mapY,
-        costPerLitre: c.cost, evidence: c.evidence, score: c.score, scores: c.scores, derived: c.verified!, recipe: null,
+        costPerLitre: c.cost, evidence: c.evidence, score: c.score, scores: c.scores, derived: c.verified!, recipe: null, shelfLife,
       })),
       counts: outcome.counts,
       bestInRange: outcome.bestInRange,
@@ -180,6 +190,7 @@ export function computePlan(job: PlanJob): StoredPlanOutcome {
       method: PLAN_METHOD,
       costFormula: COST_FORMULA,
       notes: outcome.notes,
+      shelfLife: { minimumDays, status: shelfModel.status, note: shelfLifeRequestNote(shelfModel, minimumDays), lastTimeDays: shelfModel.lastTimeDays },
       elapsedMs: Math.round(performance.now() - started),
     },
   };
