@@ -17,6 +17,7 @@ import {
   type MapModel,
   type StateMap,
 } from '../../shared/physics';
+import { median } from 'simple-statistics';
 
 const WARM_UP = 3;
 const BUILD_RUNS = 11;
@@ -36,12 +37,6 @@ const MODELS: MapModel[] = [
   { kind: 'depletion', q: 0.35 },
   { kind: 'depletion', q: 0.6 },
 ];
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = Math.floor(sorted.length / 2);
-  return sorted.length % 2 ? sorted[middle] : 0.5 * (sorted[middle - 1] + sorted[middle]);
-}
 
 function time(run: () => void): number {
   const start = performance.now();

@@ -24,6 +24,7 @@ import {
 } from '../../shared/planning';
 import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
+import { median } from 'simple-statistics';
 
 const SAMPLES = 10_000;
 const RUNS = 9;
@@ -80,12 +81,6 @@ function planOnce(c: Case, evidence: EvidenceInput[]) {
     },
   });
   return { ms: performance.now() - started, outcome };
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const middle = Math.floor(sorted.length / 2);
-  return sorted.length % 2 ? sorted[middle] : 0.5 * (sorted[middle - 1] + sorted[middle]);
 }
 
 console.log(`Planner: ${SAMPLES.toLocaleString('en')} candidate compositions per plan, median of ${RUNS} runs (target < ${TARGET_MS} ms)`);

@@ -1,6 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { existsSync, readFileSync, writeFileSync } from 'node:fs';
 import { join } from 'node:path';
+import { parseEnv } from 'node:util';
 
 const GENERATED = ['DB_PASSWORD', 'SESSION_SECRET'];
 
@@ -21,10 +22,9 @@ export function ensureEnvFile(root: string): string {
   return path;
 }
 
-/** Reads KEY=value lines into process.env without overriding what the caller already set. */
+/** Reads the file's settings (Node's own .env parser) into process.env without overriding what the caller already set. */
 export function loadEnvFile(path: string) {
-  for (const line of readFileSync(path, 'utf8').split('\n')) {
-    const match = /^([A-Z0-9_]+)=(.*)$/.exec(line.trim());
-    if (match && process.env[match[1]] === undefined) process.env[match[1]] = match[2];
+  for (const [name, value] of Object.entries(parseEnv(readFileSync(path, 'utf8')))) {
+    if (process.env[name] === undefined) process.env[name] = value;
   }
 }
