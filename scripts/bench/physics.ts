@@ -9,6 +9,7 @@
  */
 import {
   buildStateMap,
+  DEFAULT_SQUARE_WELL_RANGE,
   classifyPoint,
   clearModeCouplingGlassLines,
   modeCouplingGlassLine,
@@ -46,7 +47,7 @@ function time(run: () => void): number {
 
 function describeModel(model: MapModel): string {
   if (model.kind === 'depletion') return `depletion q=${model.q}`;
-  return `generic ${model.theory} / ${model.axis}${model.axis === 'squareWellDepth' ? ` λ=${model.lambda ?? 1.5}` : ''}`;
+  return `generic ${model.theory} / ${model.axis}${model.axis === 'squareWellDepth' ? ` λ=${model.lambda ?? DEFAULT_SQUARE_WELL_RANGE}` : ''}`;
 }
 
 /** Deterministic pseudo-random points spread over the whole map (a linear congruential generator). */

@@ -1,13 +1,14 @@
 import { gzipSync } from 'node:zlib';
 import { createHash } from 'node:crypto';
 import { QueryTypes, type Sequelize } from 'sequelize';
+import { inverseStickinessFromReducedB2 } from '../../shared/physics/attraction/inverse-stickiness-from-reduced-b2';
 import type { ObservedState, PredictedState } from '../../shared/states';
 import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '../../shared/views/map-points';
 import type { MapPoints } from '../../shared/views/map-points';
 import type { RecipeDerived } from '../../shared/views/recipe';
 import { onProgrammeWritten } from '../http/write-events';
 
-const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : 4 * (1 - b2));
+const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : inverseStickinessFromReducedB2(b2));
 /** Six significant digits: far finer than any map can show, and a third of the bytes. */
 const short = (v: number | null | undefined) => (v === null || v === undefined || !Number.isFinite(v) ? null : Number(v.toPrecision(6)));
 

@@ -26,6 +26,7 @@ export { squareWellReducedB2, MAX_WELL_DEPTH } from './attraction/square-well-re
 export { squareWellDepthFromReducedB2 } from './attraction/square-well-depth-from-reduced-b2';
 export { reducedB2FromStickiness } from './attraction/reduced-b2-from-stickiness';
 export { stickinessFromReducedB2 } from './attraction/stickiness-from-reduced-b2';
+export { inverseStickinessFromReducedB2 } from './attraction/inverse-stickiness-from-reduced-b2';
 export { reducedB2FromPotential, type ReducedB2Options } from './attraction/reduced-b2-from-potential';
 export { asakuraOosawaPairEnergy } from './attraction/asakura-oosawa-pair-energy';
 export { asakuraOosawaContactEnergy } from './attraction/asakura-oosawa-contact-energy';

@@ -3,9 +3,17 @@ import { reducedB2FromStickiness } from './reduced-b2-from-stickiness';
 import { squareWellDepthFromReducedB2 } from './square-well-depth-from-reduced-b2';
 import { squareWellReducedB2 } from './square-well-reduced-b2';
 import { stickinessFromReducedB2 } from './stickiness-from-reduced-b2';
+import { inverseStickinessFromReducedB2 } from './inverse-stickiness-from-reduced-b2';
 import { expectArgumentError, expectRelative } from '../test-support/expect-relative';
 
 describe('square well, Baxter stickiness and their conversions', () => {
+  it('inverseStickinessFromReducedB2 is 1/τ = 4(1 − B2*), the reciprocal of stickinessFromReducedB2', () => {
+    // Noro & Frenkel, J. Chem. Phys. 113, 2941 (2000), published relation; B2* = −1.5 gives τ = 0.1 (derived).
+    expect(inverseStickinessFromReducedB2(-1.5)).toBe(10);
+    expectRelative(inverseStickinessFromReducedB2(-2.0258433150744166), 1 / stickinessFromReducedB2(-2.0258433150744166), 1e-14);
+    expect(inverseStickinessFromReducedB2(1)).toBe(0);
+  });
+
   it('squareWellReducedB2 puts the simulated λ = 1.5 critical point at B2* ≈ −2.03', () => {
     // kT_c/ε = 1.2172 for λ = 1.5: Singh, Kofke & Errington, J. Chem. Phys. 119, 3405 (2003),
     // published; B2*_c ≈ −2.03 per physics.md §2 (derived: −2.0258433150744166).

@@ -1,5 +1,6 @@
 import { brentRoot } from '../numerics/brent-root';
 import { requireInRange } from '../validation/require-in-range';
+import { meanFieldStrength } from './mean-field-branches';
 import { meanFieldCriticalPointShared } from './mean-field-critical-point';
 import { meanFieldSpinodalStrength } from './mean-field-spinodal-strength';
 
@@ -28,7 +29,7 @@ export function meanFieldSpinodal(b2: number): { low: number; high: number } | n
 export function meanFieldSpinodalUnchecked(b2: number): { low: number; high: number } | null {
   const critical = meanFieldCriticalPointShared();
   if (b2 >= critical.b2) return null;
-  const strength = 4 * (1 - b2);
+  const strength = meanFieldStrength(b2);
   const excess = (phi: number) => meanFieldSpinodalStrength(phi) - strength;
   const low = brentRoot(excess, 1e-12, critical.phi, { absoluteTolerance: 1e-16 });
   const high = brentRoot(excess, critical.phi, 0.99, { absoluteTolerance: 1e-16 });

@@ -1,5 +1,6 @@
 import type { MapModel } from './types';
 import { DEFAULT_SQUARE_WELL_RANGE } from './resolve-map-model';
+import { inverseStickinessFromReducedB2 } from '../attraction/inverse-stickiness-from-reduced-b2';
 
 type GenericModel = Extract<MapModel, { kind: 'generic' }>;
 
@@ -14,7 +15,7 @@ export function genericYFromB2(model: GenericModel, b2: number): number {
     case 'b2':
       return b2;
     case 'inverseTau':
-      return 4 * (1 - b2);
+      return inverseStickinessFromReducedB2(b2);
     case 'squareWellDepth': {
       const shell = (model.lambda ?? DEFAULT_SQUARE_WELL_RANGE) ** 3 - 1;
       const argument = (1 - b2) / shell;

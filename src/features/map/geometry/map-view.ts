@@ -1,3 +1,4 @@
+import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
 import type { GlassLineMapping } from '@shared/physics/map/types';
 import type { Viewport } from './types';
 
@@ -44,7 +45,7 @@ export function parseMapView(params: URLSearchParams, defaultAxis: AxisChoice): 
   return {
     axis,
     theory,
-    lambda: number(params.get('lambda'), 1.5, 1.01, 3),
+    lambda: number(params.get('lambda'), DEFAULT_SQUARE_WELL_RANGE, 1.01, 3),
     layers,
     zoom,
     calibrated: params.get('calibrated') !== 'false',

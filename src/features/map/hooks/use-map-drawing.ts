@@ -1,6 +1,7 @@
 import { useMemo } from 'react';
 import { buildStateMap } from '@shared/physics/map/build-state-map';
 import { mapYOf } from '@shared/map-placement';
+import { inverseStickinessFromReducedB2 } from '@shared/physics/attraction/inverse-stickiness-from-reduced-b2';
 import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
 import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
@@ -62,7 +63,7 @@ export function axisTop(model: MapModel, strongest: MapRequest['strongest']): nu
   if (b2 === null || b2 >= DEFAULT_TOP_B2) return undefined;
   const target = Math.max(STRONGEST_TOP_B2, b2 * 1.1);
   if (model.axis === 'b2') return target;
-  if (model.axis === 'inverseTau') return 4 * (1 - target);
+  if (model.axis === 'inverseTau') return inverseStickinessFromReducedB2(target);
   return squareWellDepthFromReducedB2(target, model.lambda ?? DEFAULT_SQUARE_WELL_RANGE);
 }
 
