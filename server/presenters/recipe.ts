@@ -2,9 +2,6 @@ import type { Recipe, User } from '../models';
 import type { RecipeView } from '../../shared/views/recipe';
 import { storedAttraction } from '../models/recipe-shapes';
 
-/** Kept for server/seed/demo-scenario.ts; the function lives with the recipe row's shapes. */
-export { attractionColumns } from '../models/recipe-shapes';
-
 export function presentRecipe(r: Recipe & { creator?: User | null }, extra: { observationCount?: number } = {}): RecipeView {
   return {
     id: r.id,

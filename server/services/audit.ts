@@ -2,12 +2,8 @@ import type { AuditQuery } from '../../shared/schemas/team';
 import { AuditEvent, User } from '../models';
 import { paged } from './paging';
 
-/**
- * Writing an audit event is one fixed statement beside its model (`recordAudit` in
- * server/models/audit-event.ts), used by the request pipeline's `ctx.audit` and by services;
- * re-exported here for the seeds.
- */
-export { recordAudit, type AuditInput } from '../models/audit-event';
+// Writing an audit event is one fixed statement beside its model (recordAudit in
+// server/models/audit-event.ts), used by the pipeline's ctx.audit, services and seeds.
 
 export type AuditEventWithActor = AuditEvent & { actor?: User | null };
 

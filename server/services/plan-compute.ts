@@ -15,9 +15,9 @@ import { deriveRecipe, recipeFieldOf, type RecipeMaterials } from '../../shared/
 import type { PlanRequest } from '../../shared/schemas/plans';
 import { mapAttractionOf } from '../../shared/map-placement';
 import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
-import type { MapPoints } from '../../shared/views/team-data';
+import type { MapPoints } from '../../shared/views/map-points';
 import type { PlanPrice } from '../../shared/views/plan';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import type { StoredPlanOutcome } from '../models/plan';
 import { programmeShelfLifeModel, shelfLifeCovariatesOf, shelfLifeRequestNote, shelfLifeVerdict, type ShelfLifeRecipeInput, type ShelfLifeSampleInput } from '../../shared/shelf-life';
 

@@ -17,7 +17,7 @@ import { recipeFieldOf } from '../../shared/recipe-derivation';
 import type { PlanListQuery, PlanRequest } from '../../shared/schemas/plans';
 import { STATE_LABELS, type ObservedState } from '../../shared/states';
 import type { PlanPrice } from '../../shared/views/plan';
-import type { RecipeDerived } from '../../shared/views/team-data';
+import type { RecipeDerived } from '../../shared/views/recipe';
 import { badRequest, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { Calibration, Depletant, ParticleSystem, Plan, PlanRecipe, Recipe, Salt, Solvent, User } from '../models';
