@@ -9,7 +9,8 @@ import { formatNumber } from '@/lib/format';
 import { useSession } from '@/features/auth/api/get-session';
 import { SafetyNote } from '@/features/cautions/safety-note';
 import { PlanMap } from '@/features/map/components/plan-map';
-import { defaultPlanInput, doseText, ExperimentList, PlanAdviceNotice, PlanCandidates, PlanForm, PlanHistory, PlanOverview, useCreatePlan, usePlan, usePlanMaterials } from '@/features/planner';
+import { defaultPlanInput, doseText, ExperimentList, PlanAdviceNotice, PlanCandidates, PlanForm, PlanHistory, PlanOverview, useCreatePlan, usePlan } from '@/features/planner';
+import { useLiveMaterials } from '@/features/library';
 import { ProgrammeGate, ProgrammePicker, useProgrammeParam } from '@/features/programmes';
 import { useUrlParams } from '@/lib/use-url-params';
 
@@ -72,10 +73,10 @@ function PlannerScreen({ programme, canPlan }: { programme: ProgrammeView; canPl
 
 /** The form, once the library is loaded: the open plan's request, or the programme's defaults. */
 function PlanFormLoader({ programme, from, onPlanned }: { programme: ProgrammeView; from: PlanView | null; onPlanned: (plan: PlanView) => void }) {
-  const particles = usePlanMaterials('particles');
-  const solvents = usePlanMaterials('solvents');
-  const depletants = usePlanMaterials('depletants');
-  const salts = usePlanMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   const all = [particles, solvents, depletants, salts];
   if (all.some((q) => q.isPending)) return <Loading label="Loading the library…" />;
   const failed = all.find((q) => q.isError);

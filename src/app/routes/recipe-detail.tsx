@@ -12,7 +12,7 @@ import { RecipeMiniMap } from '@/features/map/components/recipe-mini-map';
 import { withProgramme } from '@/features/programmes/hooks/use-programme-param';
 import { useArchiveRecipe } from '@/features/recipes/api/archive-recipe';
 import { useRecipe } from '@/features/recipes/api/get-recipe';
-import { useRecipeObservations } from '@/features/recipes/api/get-recipe-observations';
+import { useRecipeObservations } from '@/features/bench';
 import { DerivedPanel } from '@/features/recipes/components/derived-panel';
 import { ObservationTimeline } from '@/features/recipes/components/observation-timeline';
 import { CheckScheduleForm } from '@/features/recipes/components/check-schedule-form';

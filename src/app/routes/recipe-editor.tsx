@@ -9,7 +9,7 @@ import { SafetyNote } from '@/features/cautions/safety-note';
 import { RecipeMiniMap } from '@/features/map/components/recipe-mini-map';
 import { ProgrammeGate } from '@/features/programmes/components/programme-gate';
 import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
-import { useRecipeMaterials } from '@/features/recipes/api/get-materials';
+import { useLiveMaterials } from '@/features/library';
 import { useRecipe } from '@/features/recipes/api/get-recipe';
 import { useSaveRecipe } from '@/features/recipes/api/save-recipe';
 import { LiveDerivation } from '@/features/recipes/components/live-derivation';
@@ -30,8 +30,8 @@ export function NewRecipeRoute() {
   const selection = useProgrammeParam();
   const save = useSaveRecipe();
   const navigate = useNavigate();
-  const particles = useRecipeMaterials('particles');
-  const solvents = useRecipeMaterials('solvents');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
   if (!can(user?.role, 'recipes.write')) return <Notice tone="warning">Only formulators create recipes.</Notice>;
   return (
     <>

@@ -9,7 +9,7 @@ import { SymbolText } from '@/components/ui/symbol-text';
 import { SafetyNote } from '@/features/cautions/safety-note';
 import { RecipesMap } from '@/features/map/components/recipes-map';
 import { useProgramme } from '@/features/programmes';
-import { useRecipeObservations } from '@/features/recipes/api/get-recipe-observations';
+import { useRecipeObservations } from '@/features/bench';
 import { useShortlist } from '@/features/shortlists/api/get-shortlist';
 import { DossierShelfLife, DossierShelfLifeCell } from '@/features/shortlists/components/dossier-shelf-life';
 import { Wordmark } from '../layout/wordmark';

@@ -10,5 +10,4 @@ export { ExperimentList } from './components/experiment-list';
 export { PlanHistory } from './components/plan-history';
 export { usePlan } from './api/get-plan';
 export { useCreatePlan } from './api/create-plan';
-export { usePlanMaterials } from './api/get-plan-materials';
 export { doseText } from './lib/plan-words';

@@ -1,7 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { dueCheckKeys } from './due-check-keys';
 import { postImport } from './import-request';
-import { observationKeys } from './observation-keys';
+import { observationsChanged } from './observations-changed';
 
 /**
  * Imports every row or none. The key is made once per chosen file, so a double click or a
@@ -13,7 +12,8 @@ export function useCommitImport() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: commitImport,
-    onSuccess: () => Promise.all([observationKeys.all, dueCheckKeys.all].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
+    // An import can name recipes of any programme, so every programme's overlay is asked again.
+    onSuccess: () => observationsChanged(queryClient),
   });
 }
 

@@ -2,8 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ObservationInput } from '@shared/schemas/observations';
 import type { ObservationView } from '@shared/views/observation';
 import { api } from '@/lib/api-client';
-import { dueCheckKeys } from './due-check-keys';
 import { observationKeys } from './observation-keys';
+import { observationsChanged } from './observations-changed';
 
 export const createObservation = (input: ObservationInput) => api.post<{ observation: ObservationView }>('/api/observations', input);
 
@@ -13,8 +13,8 @@ export function useCreateObservation() {
     mutationFn: createObservation,
     onSuccess: ({ observation }) => {
       queryClient.setQueryData(observationKeys.detail(observation.id), { observation });
-      // A new check can answer a due one, so the due list is asked again too.
-      return Promise.all([observationKeys.lists(), dueCheckKeys.all].map((queryKey) => queryClient.invalidateQueries({ queryKey })));
+      // A new check can answer a due one, and moves the map overlay and the shelf-life analysis.
+      return observationsChanged(queryClient, observation.programmeId);
     },
   });
 }

@@ -4,7 +4,7 @@ import { STATE_LABELS } from '@shared/states';
 import type { RecipeView } from '@shared/views/recipe';
 import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';
-import { useRecipeChoices } from '../api/find-recipes';
+import { useRecipes } from '@/features/recipes';
 import { useDebounced } from '../hooks/use-debounced';
 import type { RecordOutcomeValues } from './record-outcome-schema';
 
@@ -18,7 +18,7 @@ export function RecipeChooser({ programmeId, control, onChosen }: { programmeId:
   const [text, setText] = useState('');
   const [chosen, setChosen] = useState<RecipeView | null>(null);
   const q = useDebounced(text);
-  const choices = useRecipeChoices({ programme: programmeId, q });
+  const choices = useRecipes({ programme: programmeId, q: q.trim(), pageSize: 50, sort: 'code' });
   const { field, fieldState } = useController({ control, name: 'recipeId' });
   const found = choices.data?.items ?? [];
   const options = chosen && !found.some((r) => r.id === chosen.id) ? [chosen, ...found] : found;

@@ -3,7 +3,7 @@ import type { ObservationView } from '@shared/views/observation';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { AgreementTick, StateName } from '@/components/ui/state-badge';
 import { formatDate, formatNumber } from '@/lib/format';
-import { useRecipeObservations } from '../api/get-recipe-observations';
+import { useRecentRecipeObservations } from '@/features/bench';
 
 function countStates(items: ObservationView[]) {
   const counts = new Map<ObservedState, number>();
@@ -13,7 +13,7 @@ function countStates(items: ObservationView[]) {
 
 /** What the bench saw for this recipe, in a sentence first and then one line per outcome. */
 export function BenchSummary({ recipeId }: { recipeId: number }) {
-  const observations = useRecipeObservations(recipeId);
+  const observations = useRecentRecipeObservations(recipeId);
   if (observations.isPending) return <Loading label="Loading the bench record…" />;
   if (observations.isError) return <ErrorState error={observations.error} retry={() => observations.refetch()} />;
   const { items, total } = observations.data;

@@ -6,7 +6,7 @@ import { Card } from '@/components/ui/page';
 import { StateGlyph } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { formatDate, formatNumber } from '@/lib/format';
-import { useRecipeByCode } from '../api/get-recipe-by-code';
+import { useRecipe } from '@/features/recipes';
 import { BenchSummary } from './bench-summary';
 import { termsIn } from './glossary';
 import { SymbolText } from '@/components/ui/symbol-text';
@@ -39,7 +39,7 @@ function Part({ title, children }: { title: string; children: ReactNode }) {
 
 /** Where one recipe sits on the state map, why, how close it is to changing state, and what the bench saw. */
 export function RecipeExplanation({ code, programmeName, cautions }: { code: string; programmeName: (id: number) => string | null; cautions: ReactNode }) {
-  const query = useRecipeByCode(code);
+  const query = useRecipe(code);
   if (query.isPending) return <Loading label={`Loading ${code}…`} />;
   if (query.isError) return <ErrorState error={query.error} retry={() => query.refetch()} />;
   const recipe = query.data;

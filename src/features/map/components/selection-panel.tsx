@@ -7,7 +7,7 @@ import { TextInput } from '@/components/ui/inputs';
 import { Notice } from '@/components/ui/notice';
 import { StateBadge } from '@/components/ui/state-badge';
 import { ApiError } from '@/lib/api-client';
-import { useAddToShortlist } from '../api/add-to-shortlist';
+import { useAddToShortlist } from '@/features/shortlists';
 import type { MapPoint } from '../geometry/types';
 
 /** What the brush selected, and the step from there to a shortlist. */

@@ -3,7 +3,7 @@ import type { PlanRecipesInput } from '@shared/schemas/plans';
 import type { RecipeView } from '@shared/views/recipe';
 import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
-import { CHANGED_BY_PLAN_RECIPES, planKeys } from './plan-keys';
+import { planRecipesMade } from './plan-recipes-made';
 
 /** Chosen candidates become recipes (origin plan:<id>), and optionally a draft shortlist, in one request. */
 export const makePlanRecipes = (planId: number, input: PlanRecipesInput) =>
@@ -13,6 +13,6 @@ export function useMakePlanRecipes(planId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: PlanRecipesInput) => makePlanRecipes(planId, input),
-    onSuccess: () => Promise.all([planKeys.detail(planId), planKeys.lists(), ...CHANGED_BY_PLAN_RECIPES].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
+    onSuccess: () => planRecipesMade(queryClient, planId),
   });
 }

@@ -7,5 +7,3 @@ export const planKeys = {
   detail: (id: number) => [...planKeys.details(), id] as const,
 };
 
-/** Other screens' caches a plan's recipes change (by their key prefixes): recipes, shortlists, the map overlay. */
-export const CHANGED_BY_PLAN_RECIPES = [['recipes'], ['shortlists'], ['map-points']] as const;

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PlanExperimentRecipesInput } from '@shared/schemas/plans';
 import type { RecipeView } from '@shared/views/recipe';
 import { api } from '@/lib/api-client';
-import { CHANGED_BY_PLAN_RECIPES, planKeys } from './plan-keys';
+import { planRecipesMade } from './plan-recipes-made';
 
 /** Proposed next experiments go to the bench as draft recipes with a note. */
 export const sendExperiments = (planId: number, input: PlanExperimentRecipesInput) =>
@@ -12,6 +12,6 @@ export function useSendExperiments(planId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: PlanExperimentRecipesInput) => sendExperiments(planId, input),
-    onSuccess: () => Promise.all([planKeys.detail(planId), planKeys.lists(), ...CHANGED_BY_PLAN_RECIPES].map((queryKey) => queryClient.invalidateQueries({ queryKey }))),
+    onSuccess: () => planRecipesMade(queryClient, planId),
   });
 }

@@ -6,7 +6,7 @@ import { Field } from '@/components/ui/field';
 import { SelectInput, TextInput } from '@/components/ui/inputs';
 import { Notice } from '@/components/ui/notice';
 import { ApiError } from '@/lib/api-client';
-import { useDraftShortlists } from '../api/get-draft-shortlists';
+import { useShortlists } from '@/features/shortlists';
 import { useMakePlanRecipes } from '../api/make-plan-recipes';
 
 type Mode = 'new' | 'existing' | 'none';
@@ -17,12 +17,12 @@ type Mode = 'new' | 'existing' | 'none';
  */
 export function MakeRecipesPanel({ plan, chosen, onDone }: { plan: PlanView; chosen: number[]; onDone: () => void }) {
   const make = useMakePlanRecipes(plan.id);
-  const drafts = useDraftShortlists(plan.programmeId);
+  const drafts = useShortlists({ programme: plan.programmeId, status: 'draft' });
   const [mode, setMode] = useState<Mode>('new');
   const [title, setTitle] = useState(`Planned: ${plan.title}`.slice(0, 120));
   const [shortlistId, setShortlistId] = useState<number | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
-  const existing = shortlistId ?? drafts.data?.[0]?.id ?? null;
+  const existing = shortlistId ?? drafts.data?.items[0]?.id ?? null;
   const go = async () => {
     setProblem(null);
     try {
@@ -47,7 +47,7 @@ export function MakeRecipesPanel({ plan, chosen, onDone }: { plan: PlanView; cho
           ] as const
         ).map(([value, label]) => (
           <label key={value} className={`cursor-pointer rounded-md border px-3 py-1.5 text-sm ${mode === value ? 'border-fjord-500 bg-fjord-50 font-medium' : 'border-line-strong bg-panel'}`}>
-            <input type="radio" className="sr-only" name={`plan-${plan.id}-shortlist`} value={value} checked={mode === value} onChange={() => setMode(value)} disabled={value === 'existing' && !drafts.data?.length} />
+            <input type="radio" className="sr-only" name={`plan-${plan.id}-shortlist`} value={value} checked={mode === value} onChange={() => setMode(value)} disabled={value === 'existing' && !drafts.data?.items.length} />
             {label}
           </label>
         ))}
@@ -61,7 +61,7 @@ export function MakeRecipesPanel({ plan, chosen, onDone }: { plan: PlanView; cho
         <Field label="Draft shortlist">
           {(p) => (
             <SelectInput {...p} value={existing ?? ''} onChange={(event) => setShortlistId(Number(event.target.value))}>
-              {(drafts.data ?? []).map((s) => (
+              {(drafts.data?.items ?? []).map((s) => (
                 <option key={s.id} value={s.id}>
                   {s.title}
                 </option>

@@ -11,9 +11,8 @@ import { SelectInput, TextInput } from '@/components/ui/inputs';
 import { Notice } from '@/components/ui/notice';
 import { placeServerError } from '@/lib/form-errors';
 import { useCreatePlan } from '../api/create-plan';
-import { usePlanMaterials } from '../api/get-plan-materials';
+import { MaterialOptions, describeMaterial, useLiveMaterials } from '@/features/library';
 import { RANKINGS, rankingOf } from './rankings';
-import { MaterialOptions, describeMaterial } from '@/features/library/components/material-options';
 import { StateOptions } from '@/components/ui/state-options';
 
 const FIELDS = ['title', 'targetState', 'particleId', 'solventId', 'temperatureC', 'attraction.depletantId', 'attraction.saltId', 'attraction.concentrationGL.min', 'attraction.concentrationGL.max', 'attraction.concentrationMM.min', 'attraction.concentrationMM.max', 'phi.min', 'phi.max', 'minMargin', 'minShelfLifeDays', 'candidateCount', 'experimentCount', 'prices.particles', 'prices.solvent', 'prices.depletant', 'prices.salt'] as const;
@@ -42,10 +41,10 @@ export function defaultPlanInput(programme: ProgrammeView, ids: { particleId: nu
  * many candidates and experiments, optional prices for this plan only, and how to rank.
  */
 export function PlanForm({ initial, onPlanned }: { initial: PlanInput; onPlanned: (plan: PlanView) => void }) {
-  const particles = usePlanMaterials('particles');
-  const solvents = usePlanMaterials('solvents');
-  const depletants = usePlanMaterials('depletants');
-  const salts = usePlanMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   const create = useCreatePlan();
   const [formError, setFormError] = useState<string | null>(null);
   const [ranking, setRanking] = useState(rankingOf(initial.ranking));

@@ -2,10 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CheckScheduleInput } from '@shared/schemas/check-schedules';
 import type { CheckScheduleView } from '@shared/views/check-schedules';
 import { api } from '@/lib/api-client';
+import { dueCheckKeys } from '@/features/bench';
 import { checkScheduleKeys } from './get-check-schedule';
-
-/** The bench feature's due-check list (by its key prefix: a feature does not import another's factory). */
-const DUE_CHECKS_KEY = ['due-checks'] as const;
 
 export const setCheckSchedule = ({ recipeId, input }: { recipeId: number; input: CheckScheduleInput }) =>
   api.put<{ schedule: CheckScheduleView }>(`/api/recipes/${recipeId}/check-schedule`, input).then((answer) => answer.schedule);
@@ -17,7 +15,7 @@ export function useSetCheckSchedule() {
     mutationFn: setCheckSchedule,
     onSuccess: (schedule) => {
       queryClient.setQueryData(checkScheduleKeys.detail(schedule.recipeId), schedule);
-      return queryClient.invalidateQueries({ queryKey: DUE_CHECKS_KEY });
+      return queryClient.invalidateQueries({ queryKey: dueCheckKeys.all });
     },
   });
 }

@@ -5,7 +5,7 @@ import { deriveRecipe, type RecipeMaterials } from '@shared/recipe-derivation';
 import { recipeInputSchema, type RecipeInput } from '@shared/schemas/recipes';
 import type { RecipeDerived } from '@shared/views/recipe';
 import { Notice } from '@/components/ui/notice';
-import { useRecipeMaterials } from '../api/get-materials';
+import { useLiveMaterials } from '@/features/library';
 import { DerivedPanel } from './derived-panel';
 
 type Outcome = { ok: true; derived: RecipeDerived; map: StateMap } | { ok: false; message: string };
@@ -15,10 +15,10 @@ type Outcome = { ok: true; derived: RecipeDerived; map: StateMap } | { ok: false
  * server computes it again on save and stores its own result).
  */
 export function LiveDerivation({ values, renderMap }: { values: RecipeInput; renderMap: (map: StateMap, derived: RecipeDerived) => ReactNode }) {
-  const particles = useRecipeMaterials('particles');
-  const solvents = useRecipeMaterials('solvents');
-  const depletants = useRecipeMaterials('depletants');
-  const salts = useRecipeMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   const key = JSON.stringify(values);
   const outcome = useMemo((): Outcome => {
     // The name does not change the physics: predict before it is typed.

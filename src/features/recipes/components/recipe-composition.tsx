@@ -1,13 +1,13 @@
 import type { RecipeView } from '@shared/views/recipe';
 import { formatNumber } from '@/lib/format';
-import { useRecipeMaterials } from '../api/get-materials';
+import { useLiveMaterials } from '@/features/library';
 
 /** What the recipe is made of, in words, from its library entries. */
 export function RecipeComposition({ recipe }: { recipe: RecipeView }) {
-  const particles = useRecipeMaterials('particles');
-  const solvents = useRecipeMaterials('solvents');
-  const depletants = useRecipeMaterials('depletants');
-  const salts = useRecipeMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   const particle = particles.data?.find((m) => m.id === recipe.particleId);
   const solvent = solvents.data?.find((m) => m.id === recipe.solventId);
   const a = recipe.attraction;

@@ -11,8 +11,7 @@ import { Field } from '@/components/ui/field';
 import { SelectInput, TextArea, TextInput } from '@/components/ui/inputs';
 import { Notice } from '@/components/ui/notice';
 import { placeServerError } from '@/lib/form-errors';
-import { useRecipeMaterials } from '../api/get-materials';
-import { MaterialOptions, describeMaterial } from '@/features/library/components/material-options';
+import { MaterialOptions, describeMaterial, useLiveMaterials } from '@/features/library';
 
 const FIELDS = ['name', 'particleId', 'solventId', 'fraction.kind', 'fraction.value', 'temperatureC', 'attraction', 'attraction.depletantId', 'attraction.concentrationGL', 'attraction.saltId', 'attraction.concentrationMM', 'attraction.contactEnergyKT', 'attraction.rangeSigma', 'notes'] as const;
 
@@ -28,10 +27,10 @@ export interface RecipeFormProps {
 
 /** Compose a recipe: particles, how crowded, in what, and what makes them stick. */
 export function RecipeForm({ initial, submitLabel, onSubmit, renderPreview }: RecipeFormProps) {
-  const particles = useRecipeMaterials('particles');
-  const solvents = useRecipeMaterials('solvents');
-  const depletants = useRecipeMaterials('depletants');
-  const salts = useRecipeMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   const [formError, setFormError] = useState<string | null>(null);
   const { register, handleSubmit, setError, setValue, control, formState } = useForm<RecipeFormValues, unknown, RecipeInput>({
     resolver: zodResolver(recipeInputSchema),

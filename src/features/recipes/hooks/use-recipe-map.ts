@@ -3,7 +3,7 @@ import type { StateMap } from '@shared/physics/map/types';
 import { recipeStateMap } from '@shared/recipe-derivation';
 import type { RecipeInput } from '@shared/schemas/recipes';
 import type { RecipeView } from '@shared/views/recipe';
-import { useRecipeMaterials } from '../api/get-materials';
+import { useLiveMaterials } from '@/features/library';
 
 /** A stored recipe as the editor's input (what PUT /api/recipes/:id takes). */
 export function recipeAsInput(recipe: RecipeView): RecipeInput {
@@ -21,10 +21,10 @@ export function recipeAsInput(recipe: RecipeView): RecipeInput {
 
 /** The map a stored recipe is predicted on, rebuilt in the browser from the same library rows. */
 export function useRecipeMap(recipe: RecipeView | undefined): StateMap | null {
-  const particles = useRecipeMaterials('particles');
-  const solvents = useRecipeMaterials('solvents');
-  const depletants = useRecipeMaterials('depletants');
-  const salts = useRecipeMaterials('salts');
+  const particles = useLiveMaterials('particles');
+  const solvents = useLiveMaterials('solvents');
+  const depletants = useLiveMaterials('depletants');
+  const salts = useLiveMaterials('salts');
   return useMemo(() => {
     if (!recipe || !particles.data || !solvents.data || !depletants.data || !salts.data) return null;
     const particle = particles.data.find((m) => m.id === recipe.particleId);

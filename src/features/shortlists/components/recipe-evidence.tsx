@@ -1,10 +1,10 @@
 import { AgreementTick, StateName } from '@/components/ui/state-badge';
 import { formatDate, formatNumber } from '@/lib/format';
-import { useRecipeObservations } from '../api/get-recipe-observations';
+import { useRecentRecipeObservations } from '@/features/bench';
 
 /** What the bench observed for one recipe, newest first, each with whether it agreed with the prediction. */
 export function RecipeEvidence({ recipeId, code }: { recipeId: number; code: string }) {
-  const observations = useRecipeObservations(recipeId);
+  const observations = useRecentRecipeObservations(recipeId);
   if (observations.isPending) return <p className="text-xs text-ink-soft">Loading the bench record…</p>;
   if (observations.isError) return <p className="text-xs text-brick-700">The bench record of {code} could not be loaded.</p>;
   const { items, total } = observations.data;

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { LIMITS } from '@shared/limits';
 import { STATE_LABELS } from '@shared/states';
 import type { RecipeView } from '@shared/views/recipe';
 import { Button } from '@/components/ui/button';
@@ -6,7 +7,7 @@ import { Field } from '@/components/ui/field';
 import { TextInput } from '@/components/ui/inputs';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { formatNumber } from '@/lib/format';
-import { useProgrammeRecipes } from '../api/get-programme-recipes';
+import { useRecipes } from '@/features/recipes';
 
 const SHOWN = 12;
 
@@ -18,7 +19,7 @@ const matches = (recipe: RecipeView, text: string) => {
 /** The programme's recipes not yet on the shortlist, narrowed by code or name, each with an Add button. */
 export function RecipePicker({ programmeId, chosen, onAdd }: { programmeId: number; chosen: Set<number>; onAdd: (recipe: RecipeView) => void }) {
   const [text, setText] = useState('');
-  const recipes = useProgrammeRecipes(programmeId);
+  const recipes = useRecipes({ programme: programmeId, pageSize: LIMITS.pageSizeMax, sort: 'code' });
   if (recipes.isPending) return <Loading label="Loading the programme's recipes…" />;
   if (recipes.isError) return <ErrorState error={recipes.error} retry={() => recipes.refetch()} />;
   const open = recipes.data.items.filter((r) => !chosen.has(r.id) && matches(r, text));

@@ -1,6 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ShortlistView } from '@shared/views/shortlist';
 import { api } from '@/lib/api-client';
+import { shortlistKeys } from './shortlist-keys';
 
 const REASON = 'Picked on the state map; give the reason before submitting.';
 
@@ -22,6 +23,6 @@ export function useAddToShortlist() {
       const body = { programmeId: input.programmeId, title: input.title ?? 'Picked on the map', targetState: input.targetState, items: input.recipeIds.map((recipeId) => ({ recipeId, reason: REASON })) };
       return (await api.post<{ shortlist: ShortlistView }>('/api/shortlists', body)).shortlist;
     },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['shortlists'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: shortlistKeys.all }),
   });
 }
