@@ -2,7 +2,7 @@ import { deriveRecipeParameters, PhysicsArgumentError, type ClassifierParameters
 import { volumeFractionFromMassFraction } from './physics/colloid/volume-fraction-from-mass-fraction';
 import { recipeAttraction } from './physics/recipe/recipe-attraction';
 import { cachedStateMap } from './state-map-cache';
-import type { RecipeInput as PhysicsRecipeInput } from './physics/recipe/recipe-types';
+import type { PhysicsRecipeInput } from './physics/recipe/recipe-types';
 import type { RecipeInput } from './schemas/recipes';
 import type { DepletantView, ParticleView, SaltView, SolventView } from './views/materials';
 import type { RecipeDerived } from './views/recipe';
@@ -25,14 +25,14 @@ export function physicsInputFor(recipe: RecipeInput, materials: RecipeMaterials,
   const input: PhysicsRecipeInput = {
     particle: {
       radiusNm: particle.radiusNm,
-      densityGPerCm3: particle.densityGcm3,
-      polydispersityPercent: particle.polydispersityPct,
+      densityGcm3: particle.densityGcm3,
+      polydispersityPct: particle.polydispersityPct,
       ...(particle.surfacePotentialMv != null ? { surfacePotentialMv: particle.surfacePotentialMv } : {}),
       ...(particle.hamakerZj != null ? { hamakerJ: particle.hamakerZj * 1e-21 } : {}),
     },
     solvent: {
-      viscosityMPaS: solvent.viscosityMPas,
-      densityGPerCm3: solvent.densityGcm3,
+      viscosityMPas: solvent.viscosityMPas,
+      densityGcm3: solvent.densityGcm3,
       ...(solvent.relativePermittivity != null ? { relativePermittivity: solvent.relativePermittivity } : {}),
     },
     temperatureC: recipe.temperatureC,
@@ -43,9 +43,9 @@ export function physicsInputFor(recipe: RecipeInput, materials: RecipeMaterials,
   if (a.source === 'depletion' && materials.depletant) {
     const d = materials.depletant;
     input.depletant = {
-      molarMassKgPerMol: d.molarMassKgMol,
+      molarMassKgMol: d.molarMassKgMol,
       ...(d.rgNm != null ? { radiusOfGyrationNm: d.rgNm } : { scaling: { prefactorNm: d.rgPrefactorNm!, exponent: d.rgExponent! } }),
-      concentrationGPerL: a.concentrationGL,
+      concentrationGL: a.concentrationGL,
       concentrationBasis: 'solvent',
     };
   }
@@ -83,14 +83,14 @@ export function deriveRecipe(recipe: RecipeInput, materials: RecipeMaterials, op
   const derived: RecipeDerived = {
     modelVersion: d.modelVersion,
     phi: d.phi,
-    sizeRatio: d.q,
-    polymerReservoir: d.reservoirPolymerFraction,
-    polymerSystem: d.systemPolymerFraction,
-    overlapConcentrationGL: d.overlapConcentrationGPerL,
+    sizeRatio: d.sizeRatio,
+    polymerReservoir: d.polymerReservoir,
+    polymerSystem: d.polymerSystem,
+    overlapConcentrationGL: d.overlapConcentrationGL,
     contactEnergyKT: d.contactEnergyKT,
     rangeSigma: d.rangeSigma,
-    reducedB2: d.b2,
-    stickiness: d.tau,
+    reducedB2: d.reducedB2,
+    stickiness: d.stickiness,
     debyeLengthNm: d.debyeLengthNm,
     closestApproachNm: d.closestApproachNm,
     predictedState: d.predictedState,
@@ -117,7 +117,7 @@ export function recipeStateMap(recipe: RecipeInput, materials: RecipeMaterials, 
   const physics = physicsInputFor(recipe, materials, parameters);
   // The map model needs only q (or the theory), but the attraction is checked at the recipe's φ,
   // so a mass fraction is converted as deriveRecipeParameters does (clamped: that one names a bad φ).
-  const phi = physics.particleVolumeFraction ?? Math.min(0.7, volumeFractionFromMassFraction(physics.particleMassFraction ?? 0.1, physics.particle.densityGPerCm3, physics.solvent.densityGPerCm3));
+  const phi = physics.particleVolumeFraction ?? Math.min(0.7, volumeFractionFromMassFraction(physics.particleMassFraction ?? 0.1, physics.particle.densityGcm3, physics.solvent.densityGcm3));
   const model = recipeAttraction(physics, phi, recipe.temperatureC + 273.15).mapModel;
   return cachedStateMap(model, mapOptions(materials, parameters));
 }

@@ -126,6 +126,6 @@ export { signedBoundaryDistance } from './map/signed-boundary-distance';
 export {
   deriveRecipeParameters,
   DEFAULT_CLOSEST_APPROACH_NM,
-  type RecipeInput,
+  type PhysicsRecipeInput,
   type RecipeDerivation,
 } from './recipe/derive-recipe-parameters';

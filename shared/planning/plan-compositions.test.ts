@@ -85,8 +85,8 @@ describe('planCompositions: candidates', () => {
       expect(derived.predictedState).toBe('gel');
       expect(derived.margin).toBeGreaterThanOrEqual(0.15);
       // Placement by the free-volume steps of physics.md §4/§6: φ_p = c(1 − φ)/c*, φ_p^R = φ_p/α(φ).
-      const reservoir = (c.level * (1 - c.phi)) / derived.overlapConcentrationGPerL! / freeVolumeFraction(c.phi, derived.q!);
-      expect(derived.reservoirPolymerFraction!).toBeCloseTo(reservoir, 12);
+      const reservoir = (c.level * (1 - c.phi)) / derived.overlapConcentrationGL! / freeVolumeFraction(c.phi, derived.sizeRatio!);
+      expect(derived.polymerReservoir!).toBeCloseTo(reservoir, 12);
       expect(c.margin).toBeCloseTo(derived.margin, 6);
     }
     // The cost is the sum of the parts, recomputed here for the first candidate.
@@ -201,7 +201,7 @@ describe('planCompositions: next experiments', () => {
     const seen = first.experiments.items[0];
     expect(seen).toBeDefined();
     // Put a bench observation on the first proposal; the next plan moves away from it.
-    const evidence = [{ id: 1, label: 'BENCH-1', phi: seen.phi, attraction: { kind: 'depletion' as const, q: (compositionSpace(depletion, materials, parameters, { min: 0.05, max: 0.4 }, { min: 0, max: 12 }).map.model as { q: number }).q, polymerReservoir: derive(depletion, seen.phi, seen.level, parameters).reservoirPolymerFraction! }, observedState: 'gel' as const, ageDays: 1 }];
+    const evidence = [{ id: 1, label: 'BENCH-1', phi: seen.phi, attraction: { kind: 'depletion' as const, q: (compositionSpace(depletion, materials, parameters, { min: 0.05, max: 0.4 }, { min: 0, max: 12 }).map.model as { q: number }).q, polymerReservoir: derive(depletion, seen.phi, seen.level, parameters).polymerReservoir! }, observedState: 'gel' as const, ageDays: 1 }];
     const second = planCompositions({ ...problem(depletion, { phi: { min: 0.05, max: 0.4 }, level: { min: 0, max: 12 } }, parameters), uncertainty: calibrated, evidence });
     const map = recipeStateMap(plannedRecipeInput(depletion, 0.2, 5, 'x'), materials, parameters);
     const space = compositionSpace(depletion, materials, parameters, { min: 0.05, max: 0.4 }, { min: 0, max: 12 });

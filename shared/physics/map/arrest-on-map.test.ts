@@ -11,13 +11,13 @@ const b2 = (value: number) => ({ kind: 'b2' as const, value });
 const boundary = (map: StateMap, id: string) => map.boundaries.filter((line) => line.id === id);
 
 /** PEG in water (R_g = 0.0215 nm·M^0.583, physics.md §6) on polystyrene-like particles at 25 °C. */
-function pegRecipe(radiusNm: number, molarMassKgPerMol: number, concentrationGPerL: number, phi: number) {
+function pegRecipe(radiusNm: number, molarMassKgMol: number, concentrationGL: number, phi: number) {
   return {
-    particle: { radiusNm, densityGPerCm3: 1.05 },
-    solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 },
+    particle: { radiusNm, densityGcm3: 1.05 },
+    solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 },
     temperatureC: 25,
     particleVolumeFraction: phi,
-    depletant: { molarMassKgPerMol, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGPerL },
+    depletant: { molarMassKgMol, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGL },
   };
 }
 
@@ -75,7 +75,7 @@ describe('realistic depletion recipes', () => {
   it('gel when dilute and strongly attractive at short range (PEG 20 kg/mol on a = 250 nm, q ≈ 0.028; Lu et al. 2008), never glass', () => {
     for (const [phi, concentration] of [[0.2, 8], [0.01, 10], [0.05, 10], [0.1, 10], [0.1, 4]]) {
       const derived = deriveRecipeParameters(pegRecipe(250, 20, concentration, phi));
-      expect(derived.q!).toBeLessThan(0.03);
+      expect(derived.sizeRatio!).toBeLessThan(0.03);
       expect(derived.contactEnergyKT!).toBeGreaterThan(10);
       expect(derived.predictedState, `φ = ${phi}, ${concentration} g/L`).toBe('gel');
     }
@@ -84,7 +84,7 @@ describe('realistic depletion recipes', () => {
   it('are not called attractive glass at long range (q ≈ 1.35, 1–3 kT at contact): free-volume theory places them', () => {
     for (const [phi, concentration] of [[0.05, 0.3], [0.1, 0.3], [0.05, 1]]) {
       const derived = deriveRecipeParameters(pegRecipe(50, 1000, concentration, phi));
-      expect(derived.q!).toBeGreaterThan(1);
+      expect(derived.sizeRatio!).toBeGreaterThan(1);
       expect(derived.predictedState).not.toBe('glass');
     }
   });

@@ -16,10 +16,10 @@ export type ConcentrationBasis = 'sample' | 'solvent';
  *
  * @example Math.exp(logDepletionContactEnergy(0.3, 0.1, 3, 24, 'sample')) // 3.3225… = (3/24)/α(0.3, 0.1)·16
  */
-export function logDepletionContactEnergy(phi: number, q: number, concentrationGPerL: number, overlapGPerL: number, basis: ConcentrationBasis): number {
-  if (concentrationGPerL === 0) return -Infinity;
+export function logDepletionContactEnergy(phi: number, q: number, concentrationGL: number, overlapGL: number, basis: ConcentrationBasis): number {
+  if (concentrationGL === 0) return -Infinity;
   const logFreeVolume = logFreeVolumeFraction(phi, q);
-  const logSamplePolymer = Math.log(concentrationGPerL / overlapGPerL) + (basis === 'solvent' ? Math.log1p(-phi) : 0);
+  const logSamplePolymer = Math.log(concentrationGL / overlapGL) + (basis === 'solvent' ? Math.log1p(-phi) : 0);
   return logSamplePolymer - logFreeVolume + Math.log1p(3 / (2 * q));
 }
 

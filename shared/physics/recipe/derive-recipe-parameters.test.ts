@@ -5,13 +5,13 @@ import { allNumbers } from '../test-support/map-builders';
 import { expectArgumentError, expectRelative } from '../test-support/expect-relative';
 import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { deriveRecipeParameters } from './derive-recipe-parameters';
-import type { RecipeInput } from './recipe-types';
+import type { PhysicsRecipeInput } from './recipe-types';
 
 /** A 100 nm polystyrene-like particle in water at 25 °C (IAPWS viscosity 0.89002 mPa·s). */
-function buildRecipe(overrides: Partial<RecipeInput> = {}): RecipeInput {
+function buildRecipe(overrides: Partial<PhysicsRecipeInput> = {}): PhysicsRecipeInput {
   return {
-    particle: { radiusNm: 100, densityGPerCm3: 1.05, polydispersityPercent: 5, surfacePotentialMv: -25, hamakerJ: 1e-20 },
-    solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 },
+    particle: { radiusNm: 100, densityGcm3: 1.05, polydispersityPct: 5, surfacePotentialMv: -25, hamakerJ: 1e-20 },
+    solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 },
     temperatureC: 25,
     particleVolumeFraction: 0.2,
     ...overrides,
@@ -21,27 +21,27 @@ function buildRecipe(overrides: Partial<RecipeInput> = {}): RecipeInput {
 describe('deriveRecipeParameters', () => {
   it('derives the depletion parameters from PEG concentration: q, c*, φ_p, φ_p^R, U/kT, B2*, τ', () => {
     const derived = deriveRecipeParameters(buildRecipe({
-      depletant: { molarMassKgPerMol: 20, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGPerL: 3 },
+      depletant: { molarMassKgMol: 20, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGL: 3 },
     }));
     // R_g = 6.9173 nm (physics.md §6, Devanand & Selser fit from memory), c* = 23.9538 g/L (derived).
     expectRelative(derived.radiusOfGyrationNm!, 6.91733720962861, 1e-12);
-    expectRelative(derived.overlapConcentrationGPerL!, 23.9537571264255, 1e-12);
-    expectRelative(derived.q!, 0.0691733720962861, 1e-12);
-    expectRelative(derived.systemPolymerFraction!, 3 / 23.9537571264255, 1e-12);
-    expectRelative(derived.reservoirPolymerFraction!, derived.systemPolymerFraction! / freeVolumeFraction(0.2, derived.q!), 1e-13);
-    expectRelative(derived.contactEnergyKT!, derived.reservoirPolymerFraction! * (1 + 3 / (2 * derived.q!)), 1e-13);
-    expectRelative(derived.b2!, asakuraOosawaReducedB2(derived.q!, derived.reservoirPolymerFraction!), 1e-13);
-    expectRelative(derived.tau!, 1 / (4 * (1 - derived.b2!)), 1e-13);
-    expect(derived.rangeSigma).toBe(derived.q);
-    expect(derived.mapModel).toEqual({ kind: 'depletion', q: derived.q });
-    expect(derived.mapY).toBe(derived.reservoirPolymerFraction);
+    expectRelative(derived.overlapConcentrationGL!, 23.9537571264255, 1e-12);
+    expectRelative(derived.sizeRatio!, 0.0691733720962861, 1e-12);
+    expectRelative(derived.polymerSystem!, 3 / 23.9537571264255, 1e-12);
+    expectRelative(derived.polymerReservoir!, derived.polymerSystem! / freeVolumeFraction(0.2, derived.sizeRatio!), 1e-13);
+    expectRelative(derived.contactEnergyKT!, derived.polymerReservoir! * (1 + 3 / (2 * derived.sizeRatio!)), 1e-13);
+    expectRelative(derived.reducedB2!, asakuraOosawaReducedB2(derived.sizeRatio!, derived.polymerReservoir!), 1e-13);
+    expectRelative(derived.stickiness!, 1 / (4 * (1 - derived.reducedB2!)), 1e-13);
+    expect(derived.rangeSigma).toBe(derived.sizeRatio);
+    expect(derived.mapModel).toEqual({ kind: 'depletion', q: derived.sizeRatio });
+    expect(derived.mapY).toBe(derived.polymerReservoir);
     expect(derived.attractionSource).toBe('depletion');
   });
 
   it('scales a per-solvent concentration by (1 − φ)', () => {
-    const sample = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, radiusOfGyrationNm: 7, concentrationGPerL: 4 } }));
-    const solvent = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, radiusOfGyrationNm: 7, concentrationGPerL: 4, concentrationBasis: 'solvent' } }));
-    expectRelative(solvent.systemPolymerFraction!, sample.systemPolymerFraction! * 0.8, 1e-13);
+    const sample = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgMol: 20, radiusOfGyrationNm: 7, concentrationGL: 4 } }));
+    const solvent = deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgMol: 20, radiusOfGyrationNm: 7, concentrationGL: 4, concentrationBasis: 'solvent' } }));
+    expectRelative(solvent.polymerSystem!, sample.polymerSystem! * 0.8, 1e-13);
   });
 
   it('derives transport: Stokes–Einstein D, Brownian time, Péclet number and settling speed', () => {
@@ -62,28 +62,28 @@ describe('deriveRecipeParameters', () => {
     // Derived with mpmath (reference/derive-check-values.py, dlvo_check): contact −14.9767 kT.
     expectRelative(derived.contactEnergyKT!, 14.97668191652228, 1e-12);
     expect(derived.mapModel).toMatchObject({ kind: 'generic', axis: 'b2' });
-    expect(derived.b2!).toBeLessThan(-100);
+    expect(derived.reducedB2!).toBeLessThan(-100);
   });
 
   it('places a direct U/kT and range on the square-well map of that range', () => {
     const derived = deriveRecipeParameters(buildRecipe({ direct: { contactEnergyKT: 3, range: 0.1 } }));
     expect(derived.mapModel).toEqual({ kind: 'generic', theory: 'meanField', axis: 'squareWellDepth', lambda: 1.1 });
     expect(derived.mapY).toBeCloseTo(3, 12);
-    expectRelative(derived.b2!, 1 - (1.1 ** 3 - 1) * Math.expm1(3), 1e-13);
+    expectRelative(derived.reducedB2!, 1 - (1.1 ** 3 - 1) * Math.expm1(3), 1e-13);
   });
 
   it('converts a mass fraction to φ and treats a recipe without attraction as hard spheres', () => {
     const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: undefined, particleMassFraction: 0.3 }));
     expectRelative(derived.phi, (0.3 / 1.05) / (0.3 / 1.05 + 0.7 / 0.997), 1e-14);
-    expect(derived.b2).toBe(1);
-    expect(derived.tau).toBeNull();
+    expect(derived.reducedB2).toBe(1);
+    expect(derived.stickiness).toBeNull();
     expect(derived.predictedState).toBe('fluid');
     expect(derived.warnings.some((warning) => warning.includes('hard spheres'))).toBe(true);
   });
 
   it('reports no real root of the Percus–Yevick quadratic as a warning, never as NaN', () => {
     const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.1, theory: 'baxterPY', direct: { contactEnergyKT: 2.3, range: 0.1 } }));
-    expect(derived.tau!).toBeLessThan(0.097);
+    expect(derived.stickiness!).toBeLessThan(0.097);
     expect(derived.warnings.some((warning) => warning.includes('no real root'))).toBe(true);
     expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
   });
@@ -92,7 +92,7 @@ describe('deriveRecipeParameters', () => {
     const recipes = [
       buildRecipe(),
       buildRecipe({ salt: { concentrationMM: 10, valence: 2 } }),
-      buildRecipe({ depletant: { molarMassKgPerMol: 100, radiusOfGyrationNm: 15, concentrationGPerL: 8 } }),
+      buildRecipe({ depletant: { molarMassKgMol: 100, radiusOfGyrationNm: 15, concentrationGL: 8 } }),
       buildRecipe({ direct: { contactEnergyKT: 6, range: 0.05 } }),
     ];
     for (const recipe of recipes) {
@@ -108,11 +108,11 @@ describe('deriveRecipeParameters', () => {
     // 30 nm particles with PEG 100 kg/mol (R_g from the PEG fit, q ≈ 0.59), per-solvent 1 and 5 g/L:
     // the free volume runs out as φ rises, so φ_p^R = φ_p/α(φ) and the contact attraction grow without bound.
     const outcomes: string[] = [];
-    for (const concentrationGPerL of [1, 5]) {
+    for (const concentrationGL of [1, 5]) {
       for (const phi of [0.4, 0.45, 0.5, 0.55, 0.6, 0.65]) {
         const recipe = buildRecipe({
-          particle: { radiusNm: 30, densityGPerCm3: 1.05 }, particleVolumeFraction: phi,
-          depletant: { molarMassKgPerMol: 100, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGPerL, concentrationBasis: 'solvent' },
+          particle: { radiusNm: 30, densityGcm3: 1.05 }, particleVolumeFraction: phi,
+          depletant: { molarMassKgMol: 100, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGL: concentrationGL, concentrationBasis: 'solvent' },
         });
         try {
           const derived = deriveRecipeParameters(recipe);
@@ -133,12 +133,12 @@ describe('deriveRecipeParameters', () => {
 
   it('names the particle fraction, not an infinite φ_p^R, where the free volume underflows (q ≈ 6.7)', () => {
     const recipe = buildRecipe({
-      particle: { radiusNm: 3, densityGPerCm3: 1.05 }, particleVolumeFraction: 0.5,
-      depletant: { molarMassKgPerMol: 100, radiusOfGyrationNm: 20, concentrationGPerL: 1 },
+      particle: { radiusNm: 3, densityGcm3: 1.05 }, particleVolumeFraction: 0.5,
+      depletant: { molarMassKgMol: 100, radiusOfGyrationNm: 20, concentrationGL: 1 },
     });
     expect(() => deriveRecipeParameters(recipe)).toThrow(/^Particle fraction too high for this polymer/);
-    const withoutPolymer = deriveRecipeParameters({ ...recipe, depletant: { ...recipe.depletant!, concentrationGPerL: 0 } });
-    expect(withoutPolymer.reservoirPolymerFraction).toBe(0);
+    const withoutPolymer = deriveRecipeParameters({ ...recipe, depletant: { ...recipe.depletant!, concentrationGL: 0 } });
+    expect(withoutPolymer.polymerReservoir).toBe(0);
     expect(allNumbers(withoutPolymer).every(Number.isFinite)).toBe(true);
   });
 
@@ -151,12 +151,12 @@ describe('deriveRecipeParameters', () => {
   });
 
   it('rejects missing or out-of-range input, naming the field', () => {
-    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 0, densityGPerCm3: 1 } })), 'particle.radiusNm');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 0, densityGcm3: 1 } })), 'particle.radiusNm');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleMassFraction: 0.2 })), 'particleMassFraction');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.9 })), 'particleVolumeFraction');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ temperatureC: Number.NaN })), 'temperatureC');
-    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgPerMol: 20, concentrationGPerL: 3 } })), 'depletant.radiusOfGyrationNm');
-    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 100, densityGPerCm3: 1.05 }, salt: { concentrationMM: 50, valence: 1 } })), 'particle.surfacePotentialMv');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgMol: 20, concentrationGL: 3 } })), 'depletant.radiusOfGyrationNm');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 100, densityGcm3: 1.05 }, salt: { concentrationMM: 50, valence: 1 } })), 'particle.surfacePotentialMv');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ direct: { contactEnergyKT: -1, range: 0.1 } })), 'direct.contactEnergyKT');
   });
 });

@@ -19,10 +19,10 @@ import { requireInRange } from '../validation/require-in-range';
 import { requirePositive } from '../validation/require-positive';
 import { requireVolumeFraction } from '../validation/require-volume-fraction';
 import { recipeAttraction } from './recipe-attraction';
-import type { RecipeDerivation, RecipeInput } from './recipe-types';
+import type { RecipeDerivation, PhysicsRecipeInput } from './recipe-types';
 
 export { DEFAULT_CLOSEST_APPROACH_NM } from './recipe-attraction';
-export type { RecipeDerivation, RecipeInput } from './recipe-types';
+export type { RecipeDerivation, PhysicsRecipeInput } from './recipe-types';
 
 /**
  * Every derived parameter a recipe stores, from its materials and composition: φ (from the mass
@@ -42,19 +42,19 @@ export type { RecipeDerivation, RecipeInput } from './recipe-types';
  *   shared/state-map-cache.ts); without it a map is built (~10–40 ms).
  * @throws PhysicsArgumentError naming the field for missing or out-of-range input (e.g.
  *   `particle.radiusNm must be a radius in nm in (0, Infinity); got 0`).
- * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGPerCm3: 1.05 }, solvent: { viscosityMPaS: 0.89002, densityGPerCm3: 0.997 }, temperatureC: 25, particleVolumeFraction: 0.2 }).diffusionM2PerS // 2.4537e-12
+ * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGcm3: 1.05 }, solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 }, temperatureC: 25, particleVolumeFraction: 0.2 }).diffusionM2PerS // 2.4537e-12
  */
-export function deriveRecipeParameters(input: RecipeInput, options: { mapFor?: (model: MapModel) => StateMap } = {}): RecipeDerivation {
+export function deriveRecipeParameters(input: PhysicsRecipeInput, options: { mapFor?: (model: MapModel) => StateMap } = {}): RecipeDerivation {
   if (input === null || typeof input !== 'object') throw new PhysicsArgumentError('input', 'a recipe object', input);
   if (!input.particle || !input.solvent) throw new PhysicsArgumentError(input.particle ? 'solvent' : 'particle', 'an object with the material properties', undefined);
   const radiusNm = requirePositive('particle.radiusNm', input.particle.radiusNm, 'a radius in nm');
-  const particleDensity = requirePositive('particle.densityGPerCm3', input.particle.densityGPerCm3, 'a density in g/cm³');
-  const viscosity = requirePositive('solvent.viscosityMPaS', input.solvent.viscosityMPaS, 'a viscosity in mPa·s') * 1e-3;
-  const solventDensity = requirePositive('solvent.densityGPerCm3', input.solvent.densityGPerCm3, 'a density in g/cm³');
+  const particleDensity = requirePositive('particle.densityGcm3', input.particle.densityGcm3, 'a density in g/cm³');
+  const viscosity = requirePositive('solvent.viscosityMPas', input.solvent.viscosityMPas, 'a viscosity in mPa·s') * 1e-3;
+  const solventDensity = requirePositive('solvent.densityGcm3', input.solvent.densityGcm3, 'a density in g/cm³');
   const temperature = requireInRange('temperatureC', input.temperatureC, -30, 200, { what: 'a temperature in °C', lowEnd: 'closed', highEnd: 'closed' }) + ZERO_CELSIUS;
-  const polydispersity = input.particle.polydispersityPercent === undefined
+  const polydispersity = input.particle.polydispersityPct === undefined
     ? undefined
-    : requireInRange('particle.polydispersityPercent', input.particle.polydispersityPercent, 0, 100, { what: 'a polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
+    : requireInRange('particle.polydispersityPercent', input.particle.polydispersityPct, 0, 100, { what: 'a polydispersity in %', lowEnd: 'closed', highEnd: 'closed' });
   const phi = volumeFraction(input, particleDensity, solventDensity);
   const warnings: string[] = [];
 
@@ -91,15 +91,15 @@ export function deriveRecipeParameters(input: RecipeInput, options: { mapFor?: (
     modelVersion: PHYSICS_MODEL_VERSION,
     attractionSource: attraction.source,
     phi,
-    q: attraction.q,
+    sizeRatio: attraction.q,
     radiusOfGyrationNm: attraction.radiusOfGyrationNm,
-    overlapConcentrationGPerL: attraction.overlapConcentrationGPerL,
-    systemPolymerFraction: attraction.systemPolymerFraction,
-    reservoirPolymerFraction: attraction.reservoirPolymerFraction,
+    overlapConcentrationGL: attraction.overlapConcentrationGL,
+    polymerSystem: attraction.systemPolymerFraction,
+    polymerReservoir: attraction.reservoirPolymerFraction,
     contactEnergyKT: attraction.contactEnergyKT,
     rangeSigma: attraction.rangeSigma,
-    b2,
-    tau,
+    reducedB2: b2,
+    stickiness: tau,
     debyeLengthNm: attraction.debyeLengthNm,
     closestApproachNm: attraction.closestApproachNm,
     barrierKT: attraction.barrierKT,
@@ -118,7 +118,7 @@ export function deriveRecipeParameters(input: RecipeInput, options: { mapFor?: (
   };
 }
 
-function volumeFraction(input: RecipeInput, particleDensity: number, solventDensity: number): number {
+function volumeFraction(input: PhysicsRecipeInput, particleDensity: number, solventDensity: number): number {
   const hasMass = input.particleMassFraction !== undefined;
   const hasVolume = input.particleVolumeFraction !== undefined;
   if (hasMass === hasVolume) {

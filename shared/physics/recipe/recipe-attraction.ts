@@ -14,7 +14,7 @@ import { PhysicsArgumentError } from '../validation/physics-argument-error';
 import { requireFinite } from '../validation/require-finite';
 import { requireInRange } from '../validation/require-in-range';
 import { requirePositive } from '../validation/require-positive';
-import type { RecipeInput } from './recipe-types';
+import type { PhysicsRecipeInput } from './recipe-types';
 import { requireDepletionWithinModel } from './require-depletion-within-model';
 
 /** DLVO closest surface separation used unless a recipe gives one (physics.md §2: 0.2–0.5 nm). */
@@ -30,7 +30,7 @@ export interface RecipeAttraction {
   rangeSigma: number | null;
   q: number | null;
   radiusOfGyrationNm: number | null;
-  overlapConcentrationGPerL: number | null;
+  overlapConcentrationGL: number | null;
   systemPolymerFraction: number | null;
   reservoirPolymerFraction: number | null;
   debyeLengthNm: number | null;
@@ -43,7 +43,7 @@ export interface RecipeAttraction {
  * The attraction of a recipe from its materials: direct (square well), depletion (Asakura–
  * Oosawa with free-volume theory), salt (DLVO) or none. Internal to deriveRecipeParameters.
  */
-export function recipeAttraction(input: RecipeInput, phi: number, temperature: number): RecipeAttraction {
+export function recipeAttraction(input: PhysicsRecipeInput, phi: number, temperature: number): RecipeAttraction {
   const warnings: string[] = [];
   const theory = input.theory ?? 'meanField';
   if (theory !== 'meanField' && theory !== 'baxterPY') throw new PhysicsArgumentError('theory', "'meanField' or 'baxterPY'", theory);
@@ -51,7 +51,7 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
   const radiusNm = input.particle.radiusNm;
   const debyeLengthNm = input.salt ? saltDebyeLengthNm(input, temperature, warnings) : null;
   const empty = {
-    q: null, radiusOfGyrationNm: null, overlapConcentrationGPerL: null, systemPolymerFraction: null,
+    q: null, radiusOfGyrationNm: null, overlapConcentrationGL: null, systemPolymerFraction: null,
     reservoirPolymerFraction: null, debyeLengthNm, closestApproachNm: null, barrierKT: null,
   };
   const sources = [input.direct && 'direct', input.depletant && 'depletion', input.salt && 'salt'].filter(Boolean);
@@ -72,23 +72,23 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
 
   if (input.depletant) {
     const depletant = input.depletant;
-    const molarMassGPerMol = requirePositive('depletant.molarMassKgPerMol', depletant.molarMassKgPerMol, 'a molar mass in kg/mol') * 1000;
+    const molarMassGMol = requirePositive('depletant.molarMassKgMol', depletant.molarMassKgMol, 'a molar mass in kg/mol') * 1000;
     let radiusOfGyrationNm: number;
     if (depletant.radiusOfGyrationNm !== undefined) {
       radiusOfGyrationNm = requirePositive('depletant.radiusOfGyrationNm', depletant.radiusOfGyrationNm, 'a radius of gyration in nm');
     } else if (depletant.scaling) {
-      radiusOfGyrationNm = polymerRadiusOfGyration(molarMassGPerMol, depletant.scaling.prefactorNm, depletant.scaling.exponent);
+      radiusOfGyrationNm = polymerRadiusOfGyration(molarMassGMol, depletant.scaling.prefactorNm, depletant.scaling.exponent);
     } else {
       throw new PhysicsArgumentError('depletant.radiusOfGyrationNm', 'a radius of gyration in nm, or depletant.scaling { prefactorNm, exponent }', undefined);
     }
-    const concentration = requireInRange('depletant.concentrationGPerL', depletant.concentrationGPerL, 0, 1e4, { what: 'a concentration in g/L', lowEnd: 'closed' });
+    const concentration = requireInRange('depletant.concentrationGL', depletant.concentrationGL, 0, 1e4, { what: 'a concentration in g/L', lowEnd: 'closed' });
     const basis = depletant.concentrationBasis ?? 'sample';
     if (basis !== 'sample' && basis !== 'solvent') throw new PhysicsArgumentError('depletant.concentrationBasis', "'sample' or 'solvent'", basis);
     const q = radiusOfGyrationNm / radiusNm;
-    const overlap = polymerOverlapConcentration(molarMassGPerMol, radiusOfGyrationNm);
+    const overlap = polymerOverlapConcentration(molarMassGMol, radiusOfGyrationNm);
     // Before φ_p^R = φ_p/α: dense recipes with large coils leave α → 0 and the attraction unbounded.
     requireDepletionWithinModel({
-      phi, q, radiusNm, radiusOfGyrationNm, concentrationGPerL: concentration, overlapGPerL: overlap, basis,
+      phi, q, radiusNm, radiusOfGyrationNm, concentrationGL: concentration, overlapGL: overlap, basis,
       fractionArgument: input.particleMassFraction !== undefined ? 'particleMassFraction (as φ)' : 'particleVolumeFraction',
     });
     const perSample = basis === 'solvent' ? concentration * (1 - phi) : concentration;
@@ -107,7 +107,7 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
       source: 'depletion', warnings,
       mapModel: useFreeVolume ? { kind: 'depletion', q } : genericB2,
       attraction: useFreeVolume ? { kind: 'depletion', q, polymerReservoir: reservoir } : { kind: 'b2', value: b2 },
-      b2, contactEnergyKT: contact, rangeSigma: q, q, radiusOfGyrationNm, overlapConcentrationGPerL: overlap,
+      b2, contactEnergyKT: contact, rangeSigma: q, q, radiusOfGyrationNm, overlapConcentrationGL: overlap,
       systemPolymerFraction: systemPolymer, reservoirPolymerFraction: reservoir, debyeLengthNm,
       closestApproachNm: null, barrierKT: null,
     };
@@ -151,7 +151,7 @@ export function recipeAttraction(input: RecipeInput, phi: number, temperature: n
  */
 const SCREENING_IONIC_STRENGTH_CAP = 10;
 
-function saltDebyeLengthNm(input: RecipeInput, temperature: number, warnings: string[]): number {
+function saltDebyeLengthNm(input: PhysicsRecipeInput, temperature: number, warnings: string[]): number {
   const salt = input.salt!;
   const concentration = requireInRange('salt.concentrationMM', salt.concentrationMM, 0, 1e4, { what: 'a salt concentration in mM', highEnd: 'closed' });
   const ionicStrength = symmetricSaltIonicStrength(concentration / 1000, salt.valence);

@@ -5,20 +5,20 @@ import type { ClassifierParameters, MapModel, PredictedState, BoundaryId } from 
  * Give exactly one of particleMassFraction and particleVolumeFraction. The attraction comes from
  * `direct` if given, else from `depletant`, else from `salt` (DLVO), else none (hard spheres).
  */
-export interface RecipeInput {
+export interface PhysicsRecipeInput {
   particle: {
     radiusNm: number;
-    densityGPerCm3: number;
+    densityGcm3: number;
     /** Size polydispersity, % (standard deviation over mean radius). */
-    polydispersityPercent?: number;
+    polydispersityPct?: number;
     /** Surface potential ψ₀ in mV (charged particles, for DLVO with salt). */
     surfacePotentialMv?: number;
     /** Hamaker constant A_H in J (for DLVO with salt). */
     hamakerJ?: number;
   };
   solvent: {
-    viscosityMPaS: number;
-    densityGPerCm3: number;
+    viscosityMPas: number;
+    densityGcm3: number;
     /** Relative permittivity; 78.4 (water, 25 °C) when absent. */
     relativePermittivity?: number;
   };
@@ -26,12 +26,12 @@ export interface RecipeInput {
   particleMassFraction?: number;
   particleVolumeFraction?: number;
   depletant?: {
-    molarMassKgPerMol: number;
+    molarMassKgMol: number;
     /** R_g in nm, or else `scaling`: R_g = prefactorNm · M^exponent with M in g/mol. */
     radiusOfGyrationNm?: number;
     scaling?: { prefactorNm: number; exponent: number };
     /** Concentration in g/L. */
-    concentrationGPerL: number;
+    concentrationGL: number;
     /**
      * 'sample' (default): grams per litre of the whole sample; 'solvent': grams per litre of the
      * liquid, converted with the solvent's share of the volume, c_sample = c·(1 − φ).
@@ -55,19 +55,19 @@ export interface RecipeDerivation {
   attractionSource: 'direct' | 'depletion' | 'salt' | 'none';
   phi: number;
   /** Depletant size ratio q = R_g/a. */
-  q: number | null;
+  sizeRatio: number | null;
   radiusOfGyrationNm: number | null;
-  overlapConcentrationGPerL: number | null;
+  overlapConcentrationGL: number | null;
   /** Polymer volume fraction in the sample, φ_p = c/c*. */
-  systemPolymerFraction: number | null;
+  polymerSystem: number | null;
   /** Reservoir polymer fraction φ_p^R = φ_p/α(φ). */
-  reservoirPolymerFraction: number | null;
+  polymerReservoir: number | null;
   /** Depth of the attraction at contact, U/kT (positive = attractive). */
   contactEnergyKT: number | null;
   /** Width of the attraction beyond contact, in units of σ = 2a. */
   rangeSigma: number | null;
-  b2: number | null;
-  tau: number | null;
+  reducedB2: number | null;
+  stickiness: number | null;
   debyeLengthNm: number | null;
   /** DLVO only: the hard-core closest approach used, nm, and any repulsive barrier, kT. */
   closestApproachNm: number | null;

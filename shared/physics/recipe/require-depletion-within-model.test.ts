@@ -11,8 +11,8 @@ import { requireDepletionWithinModel, type DepletionRecipeFacts } from './requir
  */
 function buildFacts(overrides: Partial<DepletionRecipeFacts> = {}): DepletionRecipeFacts {
   return {
-    phi: 0.3, q: 17.7 / 30, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGPerL: 1,
-    overlapGPerL: 7.14892414992993, basis: 'solvent', fractionArgument: 'particleVolumeFraction', ...overrides,
+    phi: 0.3, q: 17.7 / 30, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGL: 1,
+    overlapGL: 7.14892414992993, basis: 'solvent', fractionArgument: 'particleVolumeFraction', ...overrides,
   };
 }
 
@@ -31,8 +31,8 @@ describe('logDepletionContactEnergy', () => {
     // ln α against the direct α(0.3, 0.1) = 0.6019477900 (physics.md §4, derived).
     expectRelative(logFreeVolumeFraction(0.3, 0.1), Math.log(0.6019477900), 1e-9);
     const facts = buildFacts();
-    const direct = ((1 - 0.3) / facts.overlapGPerL / freeVolumeFraction(0.3, facts.q)) * (1 + 3 / (2 * facts.q));
-    expectRelative(logDepletionContactEnergy(0.3, facts.q, 1, facts.overlapGPerL, 'solvent'), Math.log(direct), 1e-13);
+    const direct = ((1 - 0.3) / facts.overlapGL / freeVolumeFraction(0.3, facts.q)) * (1 + 3 / (2 * facts.q));
+    expectRelative(logDepletionContactEnergy(0.3, facts.q, 1, facts.overlapGL, 'solvent'), Math.log(direct), 1e-13);
   });
 
   it('stays finite where α underflows, and is −Infinity without polymer', () => {
@@ -47,7 +47,7 @@ describe('requireDepletionWithinModel', () => {
   it('lets a recipe through while its contact attraction stays within 600 kT', () => {
     // φ_max = 0.5307490 for 1 g/L per solvent (derived, depletion_recipe_limits).
     expect(() => requireDepletionWithinModel(buildFacts({ phi: 0.53 }))).not.toThrow();
-    expect(() => requireDepletionWithinModel(buildFacts({ phi: 0.6, concentrationGPerL: 0 }))).not.toThrow();
+    expect(() => requireDepletionWithinModel(buildFacts({ phi: 0.6, concentrationGL: 0 }))).not.toThrow();
   });
 
   it('names the particle fraction when the free volume runs out, with the largest φ that fits', () => {
@@ -60,8 +60,8 @@ describe('requireDepletionWithinModel', () => {
   });
 
   it('names the depletant concentration when even dilute particles would exceed the limit', () => {
-    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ concentrationGPerL: 5000, basis: 'sample' })));
-    expect(error.argument).toBe('depletant.concentrationGPerL');
+    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ concentrationGL: 5000, basis: 'sample' })));
+    expect(error.argument).toBe('depletant.concentrationGL');
     // U(φ = 0.3, 5000 g/L per sample) = 20236.3 kT; 600 kT is reached at 148.248 g/L (derived, depletion_recipe_limits).
     expect(error.message).toContain('20236 kT');
     expect(error.message).toContain('at most 148 g/L');
@@ -69,7 +69,7 @@ describe('requireDepletionWithinModel', () => {
 
   it('explains an underflowing free volume in finite words, naming the fraction field it came from', () => {
     // 3 nm particles with 20 nm coils (q ≈ 6.7) at φ = 0.5: the case that used to report "got Infinity".
-    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ phi: 0.5, q: 20 / 3, radiusNm: 3, radiusOfGyrationNm: 20, overlapGPerL: 1.3, fractionArgument: 'particleMassFraction (as φ)' })));
+    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ phi: 0.5, q: 20 / 3, radiusNm: 3, radiusOfGyrationNm: 20, overlapGL: 1.3, fractionArgument: 'particleMassFraction (as φ)' })));
     expect(error.argument).toBe('particleMassFraction (as φ)');
     expect(error.message).toMatch(/about 10\^\d+ kT/);
     expect(error.message).not.toMatch(/NaN|Infinity/);

@@ -13,8 +13,8 @@ export interface DepletionRecipeFacts {
   q: number;
   radiusNm: number;
   radiusOfGyrationNm: number;
-  concentrationGPerL: number;
-  overlapGPerL: number;
+  concentrationGL: number;
+  overlapGL: number;
   basis: ConcentrationBasis;
   /** The recipe field φ came from, e.g. 'particleVolumeFraction' or 'particleMassFraction (as φ)'. */
   fractionArgument: string;
@@ -31,32 +31,32 @@ export interface DepletionRecipeFacts {
  *
  * Sources: as logDepletionContactEnergy (Lekkerkerker et al. 1992; Asakura & Oosawa 1954).
  *
- * @throws OutsideModelError (a PhysicsArgumentError) naming 'depletant.concentrationGPerL' or the
+ * @throws OutsideModelError (a PhysicsArgumentError) naming 'depletant.concentrationGL' or the
  *   fraction argument, with a plain-words message.
- * @example requireDepletionWithinModel({ phi: 0.55, q: 0.59, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGPerL: 1, overlapGPerL: 7.2, basis: 'solvent', fractionArgument: 'particleVolumeFraction' })
+ * @example requireDepletionWithinModel({ phi: 0.55, q: 0.59, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGL: 1, overlapGL: 7.2, basis: 'solvent', fractionArgument: 'particleVolumeFraction' })
  * // throws: 'Particle fraction too high for this polymer: …'
  */
 export function requireDepletionWithinModel(facts: DepletionRecipeFacts): void {
-  const { phi, q, concentrationGPerL: c, overlapGPerL, basis } = facts;
+  const { phi, q, concentrationGL: c, overlapGL, basis } = facts;
   const limit = Math.log(DEPLETION_CONTACT_LIMIT_KT);
-  const logContact = logDepletionContactEnergy(phi, q, c, overlapGPerL, basis);
+  const logContact = logDepletionContactEnergy(phi, q, c, overlapGL, basis);
   if (logContact <= limit) return;
   const contact = describeEnergy(logContact);
   // ln U is linear in ln c, so the largest concentration at this φ follows directly.
   const largestConcentration = c * Math.exp(limit - logContact);
-  const diluteContact = Math.log(c / overlapGPerL) + Math.log1p(3 / (2 * q));
+  const diluteContact = Math.log(c / overlapGL) + Math.log1p(3 / (2 * q));
   const coils = `${formatFigure(facts.radiusOfGyrationNm)} nm polymer coils`;
   const particles = `${formatFigure(facts.radiusNm)} nm particles`;
   if (diluteContact > limit) {
     throw new OutsideModelError(
-      'depletant.concentrationGPerL',
+      'depletant.concentrationGL',
       `at most ${formatFigure(largestConcentration)} g/L at this particle fraction`,
       c,
       `Depletant concentration too high: ${formatFigure(c)} g/L of this polymer would pull the ${particles} together with ${contact} at contact, `
         + `beyond the ${DEPLETION_CONTACT_LIMIT_KT} kT the depletion model can describe. Use at most ${formatFigure(largestConcentration)} g/L at this particle fraction.`,
     );
   }
-  const largestPhi = largestFractionWithinLimit(q, c, overlapGPerL, basis, phi, limit);
+  const largestPhi = largestFractionWithinLimit(q, c, overlapGL, basis, phi, limit);
   const freeVolumePercent = 100 * Math.exp(logFreeVolumeFraction(phi, q));
   throw new OutsideModelError(
     facts.fractionArgument,

@@ -7,7 +7,7 @@ import { PhysicsArgumentError } from './physics-argument-error';
  * working; its message is a plain sentence for the person who typed the value, not the
  * `<argument> must be <range>` pattern, because the remedy involves more than one field.
  *
- * @example new OutsideModelError('depletant.concentrationGPerL', 'at most 2 g/L here', 5, 'Too much polymer …').message
+ * @example new OutsideModelError('depletant.concentrationGL', 'at most 2 g/L here', 5, 'Too much polymer …').message
  * // 'Too much polymer …'
  */
 export class OutsideModelError extends PhysicsArgumentError {
