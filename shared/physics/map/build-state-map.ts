@@ -37,7 +37,7 @@ import type {
 export const SIMULATION_CRITICAL_POINT = { phi: 0.266, tau: 0.1133 };
 
 const STATE_CODES: StateRegions['codes'] = ['fluid', 'gel', 'glass', 'crystal', 'separated', 'crystal-suppressed'];
-const STATE_LABELS: StateRegions['labels'] = {
+const REGION_LABELS: StateRegions['labels'] = {
   fluid: 'Fluid',
   gel: 'Gel (arrested phase separation)',
   glass: 'Glass (repulsive or attractive)',
@@ -321,7 +321,7 @@ function buildRegions(tables: ClassifierTables, theory: MapFrame, drawn: MapFram
       start = end;
     }
   }
-  return { codes: STATE_CODES, labels: STATE_LABELS, columns, rows, cells };
+  return { codes: STATE_CODES, labels: REGION_LABELS, columns, rows, cells };
 }
 
 function buildNotes(model: MapModel, traced: TheoryCurves, theory: MapFrame, parameters: ClassifierParameters, polydispersity: number | null, crystalSuppressed: boolean, glass: GlassLineSource): string[] {

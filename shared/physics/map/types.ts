@@ -1,5 +1,7 @@
-/** The predicted states of a recipe on the map (physics.md §5). */
-export type PredictedState = 'fluid' | 'gel' | 'glass' | 'crystal' | 'separated';
+import type { PredictedState } from '../../states';
+
+/** The predicted states of a recipe on the map (physics.md §5): the one list in shared/states.ts. */
+export type { PredictedState };
 
 /**
  * Which map to draw.
