@@ -107,7 +107,7 @@ export type {
   MapBoundary,
   MapMarker,
   MapModel,
-  MapPoint,
+  MapVertex,
   PredictedState,
   StateMap,
   StateMapOptions,

@@ -27,7 +27,7 @@ import type {
   MapBoundary,
   MapMarker,
   MapModel,
-  MapPoint,
+  MapVertex,
   StateMap,
   StateMapOptions,
   StateRegions,
@@ -248,9 +248,9 @@ function drawnBoundaries(curves: DrawnCurve[], tables: ClassifierTables, theory:
   for (const curve of curves) {
     const approximate = curve.id === 'attractive-glass' || curve.id === 'gel';
     const metastableTest = curve.id === 'binodal' || curve.id === 'spinodal'
-      ? (a: MapPoint, b: MapPoint) => crystalMoreStable(0.5 * (a[0] + b[0]), theoryU(0.5 * (a[1] + b[1])))
+      ? (a: MapVertex, b: MapVertex) => crystalMoreStable(0.5 * (a[0] + b[0]), theoryU(0.5 * (a[1] + b[1])))
       : curve.id === 'percolation'
-        ? (a: MapPoint, b: MapPoint) => {
+        ? (a: MapVertex, b: MapVertex) => {
             const phi = 0.5 * (a[0] + b[0]);
             const u0 = theoryU(0.5 * (a[1] + b[1]));
             return insideBinodal(phi, u0) || crystalMoreStable(phi, u0);

@@ -1,8 +1,8 @@
-import { formatNumber } from './format-number';
+import { formatReasonNumber } from './format-reason-number';
 import type { RuleRow, StateCause } from './state-rule';
 import type { ClassifierParameters } from './types';
 
-const fmt = (value: number) => formatNumber(value, 3);
+const fmt = (value: number) => formatReasonNumber(value, 3);
 
 /**
  * A short plain-words reason for a predicted state, with the numbers that decided it. Internal.

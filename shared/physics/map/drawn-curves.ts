@@ -2,7 +2,7 @@ import { FCC_CLOSE_PACKING } from '../hard-spheres/close-packing';
 import { curveAt, domeAt } from './state-rule';
 import type { MapFrame } from './map-frame';
 import { clipPolyline } from './polyline-tools';
-import type { BoundaryId, ClassifierParameters, ClassifierTables, DomeCurve, GlassLineSource, LevelCurve, MapPoint } from './types';
+import type { BoundaryId, ClassifierParameters, ClassifierTables, DomeCurve, GlassLineSource, LevelCurve, MapVertex } from './types';
 import { baxterPercolationStickiness } from '../fluid-fluid/baxter-percolation-stickiness';
 
 export type DrawnCurve = ClassifierTables['curves'][number];
@@ -15,7 +15,7 @@ function round10(value: number): number {
   return Math.round(value * 1e10) / 1e10;
 }
 
-export function roundPoint(point: MapPoint): MapPoint {
+export function roundPoint(point: MapVertex): MapVertex {
   return [round10(point[0]), round10(point[1])];
 }
 
@@ -33,18 +33,18 @@ export function buildDrawnCurves(
 ): DrawnCurve[] {
   const curves: DrawnCurve[] = [];
   const shift = drawn.shift;
-  const toPoint = (phi: number, u0: number): MapPoint => [phi, drawn.drawnYFromTheoryU(u0)];
-  const add = (id: BoundaryId, label: string, shape: DrawnCurve['shape'], points: MapPoint[]) => {
+  const toPoint = (phi: number, u0: number): MapVertex => [phi, drawn.drawnYFromTheoryU(u0)];
+  const add = (id: BoundaryId, label: string, shape: DrawnCurve['shape'], points: MapVertex[]) => {
     for (const inY of clipPolyline(points, (point) => drawn.uFromY(point[1]), 0, 1)) {
       for (const run of clipPolyline(inY, (point) => point[0], 0, FCC_CLOSE_PACKING)) curves.push({ id, label, shape, points: run.map(roundPoint) });
     }
   };
-  const domePoints = (dome: DomeCurve): MapPoint[] => {
+  const domePoints = (dome: DomeCurve): MapVertex[] => {
     const left = dome.left.u.map((u, i) => toPoint(dome.left.phi[i], u)).reverse();
     const right = dome.right.u.slice(1).map((u, i) => toPoint(dome.right.phi[i + 1], u));
     return [...left, ...right];
   };
-  const levelPoints = (curve: LevelCurve): MapPoint[] => curve.u.map((u, i) => toPoint(curve.phi[i], u));
+  const levelPoints = (curve: LevelCurve): MapVertex[] => curve.u.map((u, i) => toPoint(curve.phi[i], u));
 
   if (tables.binodal && tables.binodal.left.u.length > 1) add('binodal', labels.binodal, 'dome', domePoints(tables.binodal));
   if (tables.spinodal && tables.spinodal.left.u.length > 1) add('spinodal', labels.spinodal, 'dome', domePoints(tables.spinodal));
@@ -52,7 +52,7 @@ export function buildDrawnCurves(
   add('melting', 'Melting (crystal side of fluid–crystal coexistence)', 'phiOfY', levelPoints(tables.melting));
 
   const samples = 160;
-  const percolation: MapPoint[] = [];
+  const percolation: MapVertex[] = [];
   for (let i = 0; i <= samples; i++) {
     const phi = 0.001 + ((FCC_CLOSE_PACKING - 0.002) * i) / samples;
     const b2 = 1 - 1 / (4 * baxterPercolationStickiness(phi));

@@ -1,5 +1,5 @@
 import { describeCause } from './describe-cause';
-import { formatNumber } from './format-number';
+import { formatReasonNumber } from './format-reason-number';
 import type { RuleRow, StateCause } from './state-rule';
 import type { BoundaryId, ClassifiedPoint, ClassifierParameters, PredictedState } from './types';
 
@@ -89,7 +89,7 @@ export class PointClassification implements ClassifiedPoint {
   get marginDescription(): string {
     this.#marginDescription ??= Number.isNaN(this.#deltaPhi)
       ? 'no state-changing boundary on this map; margin reported as 1 (the whole map)'
-      : `${formatNumber(this.margin, 4)} (normalised map units) to ${this.nearestBoundary.label}: Δφ = ${signed(this.#deltaPhi)}, Δ${this.#yLabel} = ${signed(this.#deltaY)}`;
+      : `${formatReasonNumber(this.margin, 4)} (normalised map units) to ${this.nearestBoundary.label}: Δφ = ${signed(this.#deltaPhi)}, Δ${this.#yLabel} = ${signed(this.#deltaY)}`;
     return this.#marginDescription;
   }
 
@@ -105,6 +105,6 @@ export class PointClassification implements ClassifiedPoint {
 }
 
 function signed(value: number): string {
-  const text = formatNumber(value, 4);
+  const text = formatReasonNumber(value, 4);
   return value > 0 ? `+${text}` : text;
 }

@@ -1,12 +1,12 @@
-import type { MapPoint } from './types';
+import type { MapVertex } from './types';
 
 /**
  * Split a polyline into the runs that lie inside lo ≤ key(point) ≤ hi, adding the crossing
  * points by linear interpolation. Internal (used to clip boundaries to the map's y domain).
  */
-export function clipPolyline(points: MapPoint[], key: (point: MapPoint) => number, lo: number, hi: number): MapPoint[][] {
-  const runs: MapPoint[][] = [];
-  let current: MapPoint[] = [];
+export function clipPolyline(points: MapVertex[], key: (point: MapVertex) => number, lo: number, hi: number): MapVertex[][] {
+  const runs: MapVertex[][] = [];
+  let current: MapVertex[] = [];
   const inside = (k: number) => k >= lo && k <= hi;
   for (let i = 0; i < points.length; i++) {
     const point = points[i];
@@ -17,7 +17,7 @@ export function clipPolyline(points: MapPoint[], key: (point: MapPoint) => numbe
       if (inside(kp) !== inside(k)) {
         const edge = inside(kp) ? (k > hi ? hi : lo) : (kp > hi ? hi : lo);
         const t = (edge - kp) / (k - kp);
-        const crossing: MapPoint = [previous[0] + t * (point[0] - previous[0]), previous[1] + t * (point[1] - previous[1])];
+        const crossing: MapVertex = [previous[0] + t * (point[0] - previous[0]), previous[1] + t * (point[1] - previous[1])];
         current.push(crossing);
         if (!inside(k)) {
           if (current.length > 1) runs.push(current);
@@ -35,8 +35,8 @@ export function clipPolyline(points: MapPoint[], key: (point: MapPoint) => numbe
  * Split a polyline where a per-segment flag changes; each run keeps its flag and shares its end
  * points with its neighbours. Internal.
  */
-export function splitByFlag(points: MapPoint[], flagOfSegment: (a: MapPoint, b: MapPoint) => boolean): Array<{ points: MapPoint[]; flag: boolean }> {
-  const runs: Array<{ points: MapPoint[]; flag: boolean }> = [];
+export function splitByFlag(points: MapVertex[], flagOfSegment: (a: MapVertex, b: MapVertex) => boolean): Array<{ points: MapVertex[]; flag: boolean }> {
+  const runs: Array<{ points: MapVertex[]; flag: boolean }> = [];
   for (let i = 0; i + 1 < points.length; i++) {
     const flag = flagOfSegment(points[i], points[i + 1]);
     const last = runs[runs.length - 1];

@@ -4,7 +4,7 @@ import { requireVolumeFraction } from '../validation/require-volume-fraction';
 import { attractionOnMap } from './attraction-on-map';
 import { framesOfMap } from './frames-of-map';
 import { segmentNearest } from './polyline-tools';
-import type { AttractionInput, BoundaryId, MapPoint, StateMap } from './types';
+import type { AttractionInput, BoundaryId, MapVertex, StateMap } from './types';
 
 /**
  * Signed distance from a composition to a named boundary of a map, in the normalised map
@@ -32,7 +32,7 @@ export function signedBoundaryDistance(map: StateMap, point: { phi: number; attr
   const { y } = attractionOnMap(map, drawn, point.attraction);
   const x = phi / FCC_CLOSE_PACKING;
   const u = drawn.uFromY(y);
-  const normalised = (p: MapPoint): [number, number] => [p[0] / FCC_CLOSE_PACKING, drawn.uFromY(p[1])];
+  const normalised = (p: MapVertex): [number, number] => [p[0] / FCC_CLOSE_PACKING, drawn.uFromY(p[1])];
   let best2 = Infinity;
   const all: Array<[number, number]> = [];
   for (const piece of pieces) {

@@ -68,12 +68,12 @@ export type BoundaryId =
   | 'gel';
 
 /** A point in map coordinates: [φ, y in the y axis's own unit]. */
-export type MapPoint = [number, number];
+export type MapVertex = [number, number];
 
 export interface MapBoundary {
   id: BoundaryId;
   label: string;
-  points: MapPoint[];
+  points: MapVertex[];
   /** Drawn dashed: the branch lies where another phase is more stable (or, for percolation, inside a two-phase region). */
   metastable: boolean;
   /** Drawn as approximate (no reliable published numbers, e.g. the attractive glass). */
@@ -142,7 +142,7 @@ export interface ClassifierTables {
   /** u₀ of the glass line's nose: at stronger attraction the glass is attractive (null: never). */
   attractiveGlassFrom: number | null;
   /** Drawn curves (with the map's shift), in map units, per boundary id, for distances and signs. */
-  curves: Array<{ id: BoundaryId; label: string; shape: 'dome' | 'phiOfY' | 'yOfPhi'; points: MapPoint[] }>;
+  curves: Array<{ id: BoundaryId; label: string; shape: 'dome' | 'phiOfY' | 'yOfPhi'; points: MapVertex[] }>;
   /** For each drawn curve, a 0/1 flag per segment: 1 where the predicted state changes across it. */
   active: number[][];
 }
