@@ -36,12 +36,12 @@ export function relaxationAdvice(problem: AdviceProblem, limit: number, bestInRa
   const wideLevel: ValueRange = { min: 0, max: Math.max(level.max, Math.min(limit, Math.max(3 * level.max, level.max + 20))) };
   const space = problem.space(wideLevel);
   const { name, unit } = space.level;
-  const dose = (value: number) => `${formatNumber(value)} ${unit}`;
+  const dose = (value: number) => `${threeSignificant(value)} ${unit}`;
   if (bestInRange) {
     const to = roundDown(bestInRange.margin);
     advice.push({
       constraint: 'minMargin', from: minMargin, to, bestMargin: bestInRange.margin, at: { phi: bestInRange.phi, level: bestInRange.level },
-      message: `No ${targetName} with margin ≥ ${formatNumber(minMargin)} in these ranges; the best ${targetName} here has margin ${formatNumber(bestInRange.margin)} (φ ${bestInRange.phi.toFixed(3)}, ${dose(bestInRange.level)}). Lower the smallest margin to ${formatNumber(to)}.`,
+      message: `No ${targetName} with margin ≥ ${threeSignificant(minMargin)} in these ranges; the best ${targetName} here has margin ${threeSignificant(bestInRange.margin)} (φ ${bestInRange.phi.toFixed(3)}, ${dose(bestInRange.level)}). Lower the smallest margin to ${threeSignificant(to)}.`,
     });
   }
   const { samples } = sampleCompositions(space, ADVICE_PHI, wideLevel, ADVICE_SAMPLES);
@@ -63,7 +63,7 @@ export function relaxationAdvice(problem: AdviceProblem, limit: number, bestInRa
     const top = bestWithin(phi, relaxed)!;
     advice.push({
       constraint: up ? 'level.max' : 'level.min', from: up ? level.max : level.min, to, bestMargin: top.margin, at: { phi: top.phi, level: top.level },
-      message: `No ${targetName} with margin ≥ ${formatNumber(minMargin)} ${up ? `below ${dose(level.max)}` : `above ${dose(level.min)}`} of ${name}; at ${dose(to)} the best margin is ${formatNumber(top.margin)}. ${up ? 'Raise' : 'Lower'} the ${name} ${up ? 'limit' : 'floor'} to ${dose(to)}.`,
+      message: `No ${targetName} with margin ≥ ${threeSignificant(minMargin)} ${up ? `below ${dose(level.max)}` : `above ${dose(level.min)}`} of ${name}; at ${dose(to)} the best margin is ${threeSignificant(top.margin)}. ${up ? 'Raise' : 'Lower'} the ${name} ${up ? 'limit' : 'floor'} to ${dose(to)}.`,
     });
   }
   if (phiOnly) {
@@ -73,7 +73,7 @@ export function relaxationAdvice(problem: AdviceProblem, limit: number, bestInRa
     const top = bestWithin(relaxed, level)!;
     advice.push({
       constraint: up ? 'phi.max' : 'phi.min', from: up ? phi.max : phi.min, to, bestMargin: top.margin, at: { phi: top.phi, level: top.level },
-      message: `No ${targetName} with margin ≥ ${formatNumber(minMargin)} at φ ${up ? `up to ${phi.max}` : `from ${phi.min}`}; ${up ? 'widen φ up' : 'widen φ down'} to ${to.toFixed(2)}, where the best margin is ${formatNumber(top.margin)}.`,
+      message: `No ${targetName} with margin ≥ ${threeSignificant(minMargin)} at φ ${up ? `up to ${phi.max}` : `from ${phi.min}`}; ${up ? 'widen φ up' : 'widen φ down'} to ${to.toFixed(2)}, where the best margin is ${threeSignificant(top.margin)}.`,
     });
   }
   if (!doseOnly && !phiOnly) {
@@ -92,7 +92,7 @@ export function relaxationAdvice(problem: AdviceProblem, limit: number, bestInRa
       advice.push({
         constraint: phiConstraint, from: phiUp ? phi.max : phi.min, to: phiTo, bestMargin: top.margin, at: { phi: top.phi, level: top.level },
         also: { constraint: levelUp ? 'level.max' : 'level.min', from: levelUp ? level.max : level.min, to: levelTo },
-        message: `Neither φ nor the ${name} alone reaches a ${targetName} with margin ≥ ${formatNumber(minMargin)}: widen φ to ${phiTo.toFixed(2)} and the ${name} to ${dose(levelTo)}, where the best margin is ${formatNumber(top.margin)}.`,
+        message: `Neither φ nor the ${name} alone reaches a ${targetName} with margin ≥ ${threeSignificant(minMargin)}: widen φ to ${phiTo.toFixed(2)} and the ${name} to ${dose(levelTo)}, where the best margin is ${threeSignificant(top.margin)}.`,
       });
     }
   }
@@ -103,7 +103,7 @@ export function relaxationAdvice(problem: AdviceProblem, limit: number, bestInRa
       const to = roundDown(anywhere.margin);
       advice.push({
         constraint: 'minMargin', from: minMargin, to, bestMargin: anywhere.margin, at: { phi: anywhere.phi, level: anywhere.level },
-        message: `Nowhere in ${where} does the theory give a ${targetName} with margin ≥ ${formatNumber(minMargin)}; the best is ${formatNumber(anywhere.margin)} at φ ${anywhere.phi.toFixed(3)} and ${dose(anywhere.level)}. Lower the smallest margin to ${formatNumber(to)}, or choose other materials.`,
+        message: `Nowhere in ${where} does the theory give a ${targetName} with margin ≥ ${threeSignificant(minMargin)}; the best is ${threeSignificant(anywhere.margin)} at φ ${anywhere.phi.toFixed(3)} and ${dose(anywhere.level)}. Lower the smallest margin to ${threeSignificant(to)}, or choose other materials.`,
       });
     } else if (!anywhere) {
       const hint = space.kind === 'depletion' ? 'a larger polymer (a bigger size ratio q = R_g/a gives more attraction per gram) or another particle' : 'a salt of higher valence, or particles with a lower surface potential';
@@ -147,6 +147,7 @@ function roundDown(value: number): number {
   return Number((Math.floor(value / step + 1e-9) * step).toPrecision(2));
 }
 
-function formatNumber(value: number): string {
+/** A value with three significant figures and no trailing zeros, for advice text. */
+function threeSignificant(value: number): string {
   return Number(value.toPrecision(3)).toString();
 }
