@@ -22,8 +22,8 @@ describe('allowedMoves: the shortlist controls each person sees', () => {
     expect(shown(allowedMoves(author, shortlist('submitted')))).toEqual(['archive']);
   });
 
-  it('an administrator who wrote the shortlist may return it but not approve it', () => {
-    expect(shown(allowedMoves(admin, shortlist('submitted', admin.id)))).toEqual(['archive', 'return']);
+  it('an administrator who wrote the shortlist may neither approve nor return it (no self-review, as the server refuses)', () => {
+    expect(shown(allowedMoves(admin, shortlist('submitted', admin.id)))).toEqual(['archive']);
     expect(shown(allowedMoves(admin, shortlist('submitted')))).toEqual(['approve', 'archive', 'return']);
   });
 

@@ -23,7 +23,7 @@ export function isAuthorOrAdmin(user: { id: number; role: Role }, authorId: numb
  * Which controls a person sees on a shortlist, by the rules the server applies
  * (server/services/shortlists.ts): the moves of SHORTLIST_TRANSITIONS; content and sending on
  * belong to the author or an administrator (isAuthorOrAdmin); deciding to `shortlists.decide`,
- * but never approving one's own; an approved shortlist is frozen. The server refuses anything
+ * but never approving or returning one's own (no self-review); an approved shortlist is frozen. The server refuses anything
  * else anyway.
  */
 export function allowedMoves(user: { id: number; role: Role }, shortlist: { status: ShortlistStatus; author: { id: number } | null }): AllowedMoves {
@@ -35,7 +35,7 @@ export function allowedMoves(user: { id: number; role: Role }, shortlist: { stat
     edit: owns && shortlist.status === 'draft',
     submit: owns && next.includes('submitted'),
     approve: decides && !isAuthor && next.includes('approved'),
-    return: decides && next.includes('returned'),
+    return: decides && !isAuthor && next.includes('returned'),
     reopen: owns && next.includes('draft'),
     archive: owns && shortlist.status !== 'approved',
   };
