@@ -9,6 +9,7 @@ import * as m0007 from './0007-user-session-version';
 import * as m0008 from './0008-idempotent-writes';
 import * as m0009 from './0009-observations-export-order';
 import * as m0010 from './0010-check-schedules';
+import * as m0011 from './0011-observation-sample-height';
 
 export interface Migration {
   name: string;
@@ -28,4 +29,5 @@ export const MIGRATIONS: Migration[] = [
   { name: '0008-idempotent-writes', ...m0008 },
   { name: '0009-observations-export-order', ...m0009 },
   { name: '0010-check-schedules', ...m0010 },
+  { name: '0011-observation-sample-height', ...m0011 },
 ];

@@ -17,6 +17,8 @@ export class Observation extends Model<InferAttributes<Observation>, InferCreati
   declare storageModulusPa: number | null;
   declare yieldStressPa: number | null;
   declare settledHeightPct: number | null;
+  /** Fill height of the sample in its vial (mm); optional (older rows and bulk writers leave it NULL). */
+  declare sampleHeightMm: CreationOptional<number | null>;
   declare notes: string | null;
   declare observerId: number | null;
   declare importBatchId: string | null;
@@ -42,6 +44,7 @@ export class Observation extends Model<InferAttributes<Observation>, InferCreati
         storageModulusPa: num(),
         yieldStressPa: num(),
         settledHeightPct: num(),
+        sampleHeightMm: num(),
         notes: { type: DataTypes.TEXT, allowNull: true },
         observerId: { type: DataTypes.INTEGER, allowNull: true },
         importBatchId: { type: DataTypes.STRING(36), allowNull: true },

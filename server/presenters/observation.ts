@@ -40,6 +40,7 @@ export function presentObservation(o: LoadedObservation): ObservationView {
     storageModulusPa: o.storageModulusPa,
     yieldStressPa: o.yieldStressPa,
     settledHeightPct: o.settledHeightPct,
+    sampleHeightMm: o.sampleHeightMm ?? null,
     notes: o.notes,
     predictedState: predicted,
     agrees: observationAgrees(o.observedState, predicted),

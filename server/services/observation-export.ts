@@ -45,6 +45,7 @@ interface ExportRow {
   storageModulusPa: number | null;
   yieldStressPa: number | null;
   settledHeightPct: number | null;
+  sampleHeightMm: number | null;
   notes: string | null;
   adhocPredictedState: PredictedState | null;
   'recipe.code': string | null;
@@ -63,7 +64,7 @@ function cellsOf(row: ExportRow): string[] {
   const agrees = observationAgrees(row.observedState, predicted);
   return [
     row['recipe.code'] ?? '', row.mixedAt.toISOString().slice(0, 10), row.ageDays, row.observedState, row.method,
-    row.storageModulusPa, row.yieldStressPa, row.settledHeightPct, row.notes ?? '', predicted ?? '',
+    row.storageModulusPa, row.yieldStressPa, row.settledHeightPct, row.sampleHeightMm, row.notes ?? '', predicted ?? '',
     agrees === null ? '' : agrees ? 'yes' : 'no', row['observer.name'] ?? '', row.id,
   ].map(escapeCell);
 }
@@ -104,7 +105,7 @@ export async function streamObservationCsv(query: ObservationListQuery, res: Res
         // nesting the joined columns) is most of a page's CPU on the request thread.
         const rows = (await Observation.findAll({
           where: { [Op.and]: [where, after(last)] },
-          attributes: ['id', 'mixedAt', 'ageDays', 'observedState', 'method', 'storageModulusPa', 'yieldStressPa', 'settledHeightPct', 'notes', 'adhocPredictedState'],
+          attributes: ['id', 'mixedAt', 'ageDays', 'observedState', 'method', 'storageModulusPa', 'yieldStressPa', 'settledHeightPct', 'sampleHeightMm', 'notes', 'adhocPredictedState'],
           include: [
             { model: Recipe, as: 'recipe', attributes: ['code', 'predictedState'] },
             { model: User, as: 'observer', attributes: ['name'] },

@@ -20,10 +20,11 @@ interface ParsedRow {
   storageModulusPa: number | null;
   yieldStressPa: number | null;
   settledHeightPct: number | null;
+  sampleHeightMm: number | null;
   notes: string | null;
 }
 
-const NUMERIC = { age_days: 'ageDays', storage_modulus_pa: 'storageModulusPa', yield_stress_pa: 'yieldStressPa', settled_height_pct: 'settledHeightPct' } as const;
+const NUMERIC = { age_days: 'ageDays', storage_modulus_pa: 'storageModulusPa', yield_stress_pa: 'yieldStressPa', settled_height_pct: 'settledHeightPct', sample_height_mm: 'sampleHeightMm' } as const;
 
 /**
  * Validates every row before anything is written: the header, each cell, and that each
@@ -91,6 +92,7 @@ export async function validateImport(text: string, transaction: Transaction | nu
         storageModulusPa: (values.storageModulusPa as number | null) ?? null,
         yieldStressPa: (values.yieldStressPa as number | null) ?? null,
         settledHeightPct: (values.settledHeightPct as number | null) ?? null,
+        sampleHeightMm: (values.sampleHeightMm as number | null) ?? null,
         notes: (values.notes as string | undefined) ?? null,
       });
     }

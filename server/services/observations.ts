@@ -100,6 +100,7 @@ function measured(input: ObservationInput) {
     storageModulusPa: input.storageModulusPa ?? null,
     yieldStressPa: input.yieldStressPa ?? null,
     settledHeightPct: input.settledHeightPct ?? null,
+    sampleHeightMm: input.sampleHeightMm ?? null,
     notes: input.notes ?? null,
   };
 }
@@ -110,9 +111,9 @@ function measured(input: ObservationInput) {
  */
 const INSERT_OBSERVATION = `INSERT INTO observations
   (programme_id, recipe_id, adhoc_phi, adhoc_reduced_b2, adhoc_description, adhoc_predicted_state, mixed_at, age_days,
-   observed_state, method, storage_modulus_pa, yield_stress_pa, settled_height_pct, notes, observer_id, import_batch_id,
-   archived_at, created_at, updated_at)
-  VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, NULL, NULL, ?, ?)`;
+   observed_state, method, storage_modulus_pa, yield_stress_pa, settled_height_pct, sample_height_mm, notes, observer_id,
+   import_batch_id, archived_at, created_at, updated_at)
+  VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, NULL, NULL, ?, ?)`;
 
 export async function createObservation(ctx: Ctx, input: ObservationInput) {
   const { recipe, fields } = await resolveSubject(ctx, input);
@@ -124,7 +125,7 @@ export async function createObservation(ctx: Ctx, input: ObservationInput) {
     replacements: [
       values.programmeId, values.recipeId, values.adhocPhi, values.adhocReducedB2, values.adhocDescription, values.adhocPredictedState,
       values.mixedAt, values.ageDays, values.observedState, values.method, values.storageModulusPa, values.yieldStressPa,
-      values.settledHeightPct, values.notes, values.observerId, now, now,
+      values.settledHeightPct, values.sampleHeightMm, values.notes, values.observerId, now, now,
     ],
   });
   const observation = Observation.build({ ...values, id: Number(insertId), archivedAt: null, createdAt: now, updatedAt: now }, { isNewRecord: false, raw: true });

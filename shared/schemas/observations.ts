@@ -25,6 +25,8 @@ export const observationFields = {
   storageModulusPa: boundedNumber('Storage modulus', 0, 1e10, 'Pa').nullable().optional(),
   yieldStressPa: boundedNumber('Yield stress', 0, 1e8, 'Pa').nullable().optional(),
   settledHeightPct: boundedNumber('Settled height', 0, 100, '%').nullable().optional(),
+  /** Fill height of the sample in its vial or tube; the shelf-life model reads it (docs/shelf-life.md). */
+  sampleHeightMm: boundedNumber('Sample height', 1, 1000, 'mm').nullable().optional(),
   notes: optionalText('Notes', LIMITS.notesLength),
 };
 
@@ -66,6 +68,7 @@ export const IMPORT_COLUMNS = [
   'storage_modulus_pa',
   'yield_stress_pa',
   'settled_height_pct',
+  'sample_height_mm',
   'notes',
 ] as const;
 export const REQUIRED_IMPORT_COLUMNS = ['recipe_code', 'mixed_on', 'age_days', 'observed_state', 'method'] as const;

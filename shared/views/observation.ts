@@ -26,6 +26,8 @@ export interface ObservationView {
   storageModulusPa: number | null;
   yieldStressPa: number | null;
   settledHeightPct: number | null;
+  /** Fill height of the sample in its vial or tube (mm), when recorded. */
+  sampleHeightMm: number | null;
   notes: string | null;
   predictedState: PredictedState | null;
   agrees: boolean | null;

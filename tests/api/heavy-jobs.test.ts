@@ -97,7 +97,7 @@ describe('planner runs in a worker thread', () => {
 describe('CSV imports are parsed in a worker thread', () => {
   /** A bench-log CSV of `rows` rows with the import's own header (invented rows). */
   const bigCsv = (rows: number) =>
-    Buffer.from([IMPORT_COLUMNS.join(','), ...Array.from({ length: rows }, (_, i) => `NO-SUCH-${i},2026-10-01,${i % 60},gel,visual,120,3,95,"a note, with a comma"`)].join('\n'));
+    Buffer.from([IMPORT_COLUMNS.join(','), ...Array.from({ length: rows }, (_, i) => `NO-SUCH-${i},2026-10-01,${i % 60},gel,visual,120,3,95,40,"a note, with a comma"`)].join('\n'));
 
   it('a file longer than the row cap is refused with the cap named, after parsing off the request thread; nothing is stored', async () => {
     const agent = await agentFor(stack.app, scientist);

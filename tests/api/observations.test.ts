@@ -86,6 +86,24 @@ describe('POST /api/observations', () => {
     expect(await tableCounts(stack.sequelize)).toEqual(before);
   });
 
+  it('records an optional sample height in mm, refuses one outside 1–1000 mm with a 400 naming it, and lets a correction clear it', async () => {
+    const tall = await scientist.post('/api/observations').send(observation({ sampleHeightMm: 48.5 }));
+    expect(tall.status).toBe(201);
+    expect(tall.body.observation.sampleHeightMm).toBe(48.5);
+    expect((await scientist.get(`/api/observations/${tall.body.observation.id}`)).body.observation.sampleHeightMm).toBe(48.5);
+    expect((await scientist.post('/api/observations').send(observation())).body.observation.sampleHeightMm).toBeNull();
+    const before = await tableCounts(stack.sequelize);
+    for (const bad of [0.5, 1001, 'tall']) {
+      const refused = await scientist.post('/api/observations').send(observation({ sampleHeightMm: bad }));
+      expect(refused.status).toBe(400);
+      expect(refused.body.error.field).toBe('sampleHeightMm');
+      expect(refused.body.error.message).toMatch(/Sample height must be/);
+    }
+    expect(await tableCounts(stack.sequelize)).toEqual(before);
+    const cleared = await scientist.put(`/api/observations/${tall.body.observation.id}`).send(observation({ sampleHeightMm: null }));
+    expect(cleared.body.observation.sampleHeightMm).toBeNull();
+  });
+
   it('lets only the observer or an administrator correct or archive a record', async () => {
     const mine = (await scientist.post('/api/observations').send(observation())).body.observation;
     const colleague = await signedInAgent(stack.app, await buildUser({ role: 'scientist' }));
@@ -174,6 +192,28 @@ describe('POST /api/observations/import', () => {
     expect(other.status).toBe(409);
     expect(other.body.error.message).toMatch(/Idempotency-Key was used before for a different file/);
     expect(await Observation.count()).toBe(before);
+  });
+
+  it('imports the optional sample_height_mm column (blank: not recorded; out of bounds: the row and column named) and exports it', async () => {
+    const header = [...HEADER.slice(0, -1), 'sample_height_mm', 'notes'];
+    const rows = [
+      [recipe.code, '2026-10-07', '1', 'gel', 'visual', '', '', '', '55', 'filled to 55 mm'],
+      [recipe.code, '2026-10-07', '3', 'gel', 'visual', '', '', '', '', 'height not given'],
+      [recipe.code, '2026-10-08', '1', 'gel', 'visual', '', '', '', '0', 'impossible height'],
+    ];
+    const before = await Observation.count();
+    const bad = await scientist.post('/api/observations/import').attach('file', csv([header, ...rows]), 'heights.csv');
+    expect(bad.status).toBe(422);
+    expect(bad.body.report.problems).toEqual([{ row: 4, column: 'sample_height_mm', message: 'Sample height must be between 1 and 1000 mm' }]);
+    expect(await Observation.count()).toBe(before);
+    const good = await scientist.post('/api/observations/import').attach('file', csv([header, ...rows.slice(0, 2)]), 'heights.csv');
+    expect(good.status).toBe(201);
+    const stored = await Observation.findAll({ where: { importBatchId: good.body.report.batchId }, order: [['ageDays', 'ASC']] });
+    expect(stored.map((o) => o.sampleHeightMm)).toEqual([55, null]);
+    const exported = parse((await scientist.get(`/api/observations/export?recipe=${recipe.id}`)).text, { columns: true }) as Record<string, string>[];
+    const byId = new Map(exported.map((r) => [r.observation_id, r]));
+    expect(byId.get(String(stored[0].id))).toMatchObject({ sample_height_mm: '55', notes: 'filled to 55 mm' });
+    expect(byId.get(String(stored[1].id))).toMatchObject({ sample_height_mm: '', notes: 'height not given' });
   });
 
   it('stores formula-looking cells as text and escapes them again on export', async () => {

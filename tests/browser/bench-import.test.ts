@@ -1,3 +1,4 @@
+import { parse } from 'csv-parse/sync';
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { IMPORT_COLUMNS } from '../../shared/schemas/observations';
@@ -56,8 +57,8 @@ describe('the bench log', () => {
     expect(decodeURIComponent(template!.split(',').slice(1).join(','))).toBe(`${IMPORT_COLUMNS.join(',')}\r\n`);
 
     const bad = csv([
-      [first.code, '2026-02-02', '7', 'gel', 'rheology', '48', '', '', 'first batch'],
-      [second.code, '2026-02-02', '7', 'wobbly', 'visual', '', '', '', ''],
+      [first.code, '2026-02-02', '7', 'gel', 'rheology', '48', '', '', '45', 'first batch'],
+      [second.code, '2026-02-02', '7', 'wobbly', 'visual', '', '', '', '', ''],
     ]);
     await page.getByLabel('CSV file to import').setInputFiles({ name: 'primer-batch.csv', mimeType: 'text/csv', buffer: bad });
     const report = page.getByRole('table', { name: 'Problems found in the file' });
@@ -73,8 +74,8 @@ describe('the bench log', () => {
 
     // Each fixed row observes what was predicted, so both agree (the next test relies on that).
     const fixed = csv([
-      [first.code, '2026-02-02', '7', first.derived.predictedState!, 'rheology', '48', '', '', 'first batch'],
-      [second.code, '2026-02-02', '7', second.derived.predictedState!, 'visual', '', '', '', ''],
+      [first.code, '2026-02-02', '7', first.derived.predictedState!, 'rheology', '48', '', '', '45', 'first batch'],
+      [second.code, '2026-02-02', '7', second.derived.predictedState!, 'visual', '', '', '', '', ''],
     ]);
     await page.getByLabel('CSV file to import').setInputFiles({ name: 'primer-batch-fixed.csv', mimeType: 'text/csv', buffer: fixed });
     await page.getByText('All 2 rows of primer-batch-fixed.csv are valid').waitFor();
@@ -93,6 +94,7 @@ describe('the bench log', () => {
     expect(text).toContain(first.code);
     expect(text).toContain(second.code);
     expect(text).toContain('G′ 48 Pa');
+    expect(text).toContain('fill 45 mm');
     await expectAccessible(page);
     await screenshot(page, 'bench-import-done');
     // The refused file is a 422 by design.
@@ -109,9 +111,11 @@ describe('the bench log', () => {
     await page.goto(`${suite.stack.url}/bench?programme=${programme.id}`);
     await page.getByRole('button', { name: 'Record an outcome' }).click();
     const form = page.getByRole('form', { name: 'Record an outcome' });
+    await form.getByLabel('Sample height (mm)').fill('0');
     await form.getByRole('button', { name: 'Save the outcome' }).click();
     await form.getByText('Choose the recipe you observed').waitFor();
     await form.getByText('Choose the state you observed').waitFor();
+    await form.getByText('Sample height must be between 1 and 1000 mm').waitFor();
     await expectAccessible(page);
     await screenshot(page, 'bench-record-errors');
 
@@ -123,6 +127,7 @@ describe('the bench log', () => {
     await form.getByLabel('Observed state').selectOption('collapsed');
     await form.getByLabel('Method').selectOption('visual');
     await form.getByLabel('Settled height (% of fill)').fill('62');
+    await form.getByLabel('Sample height (mm)').fill('52');
     await form.getByLabel('Notes').fill('clear layer on top after a month');
     await form.getByRole('button', { name: 'Save the outcome' }).click();
     await page.getByText('Outcome recorded').waitFor();
@@ -158,6 +163,8 @@ describe('the bench log', () => {
     const body = await exported.text();
     expect(body).toContain('clear layer on top');
     expect(body).not.toContain('first batch');
+    const rows = parse(body, { columns: true }) as Record<string, string>[];
+    expect(rows.find((r) => r.notes === 'clear layer on top after a month')).toMatchObject({ settled_height_pct: '62', sample_height_mm: '52' });
     expect(unexpected()).toEqual([]);
     await context.close();
   });

@@ -12,6 +12,7 @@ function measured(o: ObservationView): string[] {
   if (o.storageModulusPa !== null) parts.push(`G′ ${formatNumber(o.storageModulusPa)} Pa`);
   if (o.yieldStressPa !== null) parts.push(`yield ${formatNumber(o.yieldStressPa)} Pa`);
   if (o.settledHeightPct !== null) parts.push(`settled ${formatNumber(o.settledHeightPct)} %`);
+  if (o.sampleHeightMm !== null) parts.push(`fill ${formatNumber(o.sampleHeightMm)} mm`);
   return parts;
 }
 

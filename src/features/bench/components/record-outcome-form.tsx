@@ -16,7 +16,7 @@ import { RecipeChooser } from './recipe-chooser';
 import { recordOutcomeSchema, todayLocal, type RecordOutcomeInput, type RecordOutcomeValues } from './record-outcome-schema';
 import { StateOptions } from '@/components/ui/state-options';
 
-const FIELDS = ['recipeId', 'mixedAt', 'ageDays', 'observedState', 'method', 'storageModulusPa', 'yieldStressPa', 'settledHeightPct', 'notes'] as const;
+const FIELDS = ['recipeId', 'mixedAt', 'ageDays', 'observedState', 'method', 'storageModulusPa', 'yieldStressPa', 'settledHeightPct', 'sampleHeightMm', 'notes'] as const;
 
 /** An empty box is "not measured" (null); a required one stays undefined so the schema names it. */
 const optionalNumber = (raw: unknown) => (raw === '' || raw === null || raw === undefined ? null : Number(raw));
@@ -31,6 +31,7 @@ const blank = (): RecordOutcomeValues => ({
   storageModulusPa: null,
   yieldStressPa: null,
   settledHeightPct: null,
+  sampleHeightMm: null,
   notes: '',
 });
 
@@ -112,7 +113,7 @@ export function RecordOutcomeForm({ programmeId }: { programmeId: number }) {
           )}
         </Field>
       </div>
-      <fieldset className="grid gap-4 md:grid-cols-3">
+      <fieldset className="grid gap-4 md:grid-cols-4">
         <legend className="mb-2 text-sm font-medium text-ink-soft">Measured values, if any</legend>
         <Field label="Storage modulus G′ (Pa)" error={formState.errors.storageModulusPa?.message}>
           {(props) => <TextInput {...props} type="number" min={0} step="any" {...register('storageModulusPa', { setValueAs: optionalNumber })} />}
@@ -122,6 +123,13 @@ export function RecordOutcomeForm({ programmeId }: { programmeId: number }) {
         </Field>
         <Field label="Settled height (% of fill)" error={formState.errors.settledHeightPct?.message}>
           {(props) => <TextInput {...props} type="number" min={0} max={100} step="any" {...register('settledHeightPct', { setValueAs: optionalNumber })} />}
+        </Field>
+        <Field
+          label="Sample height (mm)"
+          error={formState.errors.sampleHeightMm?.message}
+          hint={<span className="text-ink-soft">Fill height in the vial; shelf life uses the latest given for the sample.</span>}
+        >
+          {(props) => <TextInput {...props} type="number" min={1} max={1000} step="any" {...register('sampleHeightMm', { setValueAs: optionalNumber })} />}
         </Field>
       </fieldset>
       <Field label="Notes" error={formState.errors.notes?.message}>
