@@ -28,7 +28,8 @@ export interface ShelfLifeJob {
  * (φ/φ_cp and B2* on the generic mean-field B2* map, the map ad-hoc samples are placed on), so
  * recipes of every size ratio are comparable for grouping. And their samples: each recipe's live
  * bench checks turned into survival records (survivalRecordsFromChecks: one sample per mixing
- * date). Ad-hoc samples have no recipe and are left out. Two plain queries, no model objects.
+ * date, with the latest fill height recorded among its checks). Ad-hoc samples have no recipe and
+ * are left out. Two plain queries, no model objects.
  */
 export async function shelfLifeInput(sequelize: Sequelize, programmeId: number): Promise<Omit<ShelfLifeJob, 'focusRecipeId'>> {
   const rows = await sequelize.query<{ id: number; code: string; name: string; particle_id: number; depletant_id: number | null; solvent_id: number; derived: string | RecipeDerived }>(
@@ -54,8 +55,8 @@ export async function shelfLifeInput(sequelize: Sequelize, programmeId: number):
       covariates: shelfLifeCovariatesOf(d),
     };
   });
-  const checks = await sequelize.query<{ recipe_id: number; mixed_at: Date | string; age_days: number; observed_state: ObservedState }>(
-    `SELECT o.recipe_id, o.mixed_at, o.age_days, o.observed_state
+  const checks = await sequelize.query<{ id: number; recipe_id: number; mixed_at: Date | string; age_days: number; observed_state: ObservedState; sample_height_mm: number | null }>(
+    `SELECT o.id, o.recipe_id, o.mixed_at, o.age_days, o.observed_state, o.sample_height_mm
        FROM observations o JOIN recipes r ON r.id = o.recipe_id
       WHERE o.programme_id = ? AND o.archived_at IS NULL AND r.archived_at IS NULL`,
     { replacements: [programmeId], type: QueryTypes.SELECT },
@@ -63,7 +64,13 @@ export async function shelfLifeInput(sequelize: Sequelize, programmeId: number):
   const byRecipe = new Map<number, SampleCheck[]>();
   for (const c of checks) {
     const list = byRecipe.get(c.recipe_id) ?? [];
-    list.push({ mixedAt: c.mixed_at instanceof Date ? c.mixed_at.toISOString() : String(c.mixed_at), ageDays: Number(c.age_days), observedState: c.observed_state });
+    list.push({
+      observationId: c.id,
+      mixedAt: c.mixed_at instanceof Date ? c.mixed_at.toISOString() : String(c.mixed_at),
+      ageDays: Number(c.age_days),
+      observedState: c.observed_state,
+      sampleHeightMm: c.sample_height_mm === null ? null : Number(c.sample_height_mm),
+    });
     byRecipe.set(c.recipe_id, list);
   }
   const samples = [...byRecipe].flatMap(([recipeId, list]) => survivalRecordsFromChecks(list).map((s) => ({ recipeId, ...s })));

@@ -25,9 +25,9 @@ export {
   describePrediction,
   COLLAPSE_PHYSICS_CONTEXT,
   SHELF_LIFE_COVARIATES,
-  SAMPLE_HEIGHT_OMITTED,
   type ShelfLifeCovariateKey,
   type ShelfLifeCovariates,
+  type ShelfLifeRecipeCovariates,
   type ShelfLifeModel,
   type ShelfLifeModelFitted,
   type ShelfLifeModelRefused,
@@ -49,4 +49,5 @@ export {
   type SurvivalSummary,
 } from './programme-shelf-life';
 export { shelfLifeCovariatesOf } from './shelf-life-covariates-of';
+export { latestSampleHeightMm, type HeightAtCheck } from './latest-sample-height';
 export { shelfLifeVerdict, shelfLifeRequestNote, type ShelfLifeVerdict } from './shelf-life-requirement';

@@ -21,8 +21,11 @@ function naiveProductLimit(records: { timeDays: number; collapsed: boolean }[], 
   return times.reduce((s, time) => s * (1 - records.filter((r) => r.collapsed && r.timeDays === time).length / records.filter((r) => r.timeDays >= time).length), 1);
 }
 
-/** Many recipes whose collapse hazard falls with attraction: h = 0.04·exp(−0.5·(U/kT − 5) + 10·(φ − 0.15)) per day. */
-function inventedProgramme(seed: number, recipeCount: number, samplesPerRecipe: number) {
+/**
+ * Many recipes whose collapse hazard falls with attraction: h = 0.04·exp(−0.5·(U/kT − 5) + 10·(φ − 0.15)) per day;
+ * with `heightEffect`, each sample also gets a fill height of 20–80 mm and the hazard a factor exp(heightEffect·(H − 50 mm)).
+ */
+function inventedProgramme(seed: number, recipeCount: number, samplesPerRecipe: number, heightEffect?: number) {
   const random = seededRandom(seed);
   const recipes = Array.from({ length: recipeCount }, (_, i) =>
     recipe(i + 1, {
@@ -33,10 +36,12 @@ function inventedProgramme(seed: number, recipeCount: number, samplesPerRecipe: 
   );
   const samples: ShelfLifeSampleInput[] = recipes.flatMap((r) =>
     Array.from({ length: samplesPerRecipe }, () => {
-      const hazard = 0.04 * Math.exp(-0.5 * (r.covariates.attractionKt! - 5) + 10 * (r.covariates.phi! - 0.15));
+      const sampleHeightMm = heightEffect === undefined ? undefined : 20 + 60 * random();
+      const hazard = 0.04 * Math.exp(-0.5 * (r.covariates.attractionKt! - 5) + 10 * (r.covariates.phi! - 0.15) + (heightEffect ?? 0) * ((sampleHeightMm ?? 50) - 50));
       const collapseDay = -Math.log(1 - random()) / hazard;
       const lastCheck = 10 + Math.floor(80 * random());
-      return collapseDay <= lastCheck ? { recipeId: r.id, timeDays: Math.ceil(collapseDay), collapsed: true } : { recipeId: r.id, timeDays: lastCheck, collapsed: false };
+      const record = collapseDay <= lastCheck ? { recipeId: r.id, timeDays: Math.ceil(collapseDay), collapsed: true } : { recipeId: r.id, timeDays: lastCheck, collapsed: false };
+      return sampleHeightMm === undefined ? record : { ...record, sampleHeightMm };
     }),
   );
   return { recipes, samples };
@@ -85,11 +90,41 @@ describe('programmeShelfLife', () => {
     expect(attraction.reading).toMatch(/^each \+1 kT of attraction multiplies the collapse hazard by 0\.\d\d/);
     expect(drivers.omitted.map((o) => o.key)).toEqual(['log10Peclet', 'sampleHeightMm']);
     expect(drivers.omitted[0].why).toBe('the same (-2) in every sample');
+    expect(drivers.omitted[1].why).toBe('not recorded on the bench log for 600 of 600 samples');
     // Stronger attraction, longer predicted life (the sign the truth was generated with).
     const weak = modelMedianDays(drivers, { attractionKt: 3, phi: 0.15, log10Peclet: null });
     const strong = modelMedianDays(drivers, { attractionKt: 6, phi: 0.15, log10Peclet: null });
     expect(weak).not.toBeNull();
     expect(strong === null || strong > weak!).toBe(true);
+  });
+
+  it('uses the sample height when every sample has one, and recovers the invented effect within its 95 % interval (generating truth β = 0.03 per mm, hazard ratio e^0.3 per 10 mm)', () => {
+    const { recipes, samples } = inventedProgramme(12, 60, 10, 0.03);
+    const result = programmeShelfLife(recipes, samples);
+    const { drivers } = result;
+    expect(drivers.status).toBe('fitted');
+    if (drivers.status !== 'fitted') return;
+    const height = drivers.terms.find((t) => t.key === 'sampleHeightMm')!;
+    expect(height).toMatchObject({ label: 'sample height', unit: 'mm', step: 10 });
+    expect(height.low).toBeLessThan(0.03);
+    expect(height.high).toBeGreaterThan(0.03);
+    expect(height.hazardRatio).toBeCloseTo(Math.exp(10 * height.coefficient), 12);
+    expect(height.reading).toMatch(/^each \+10 mm of sample height multiplies the collapse hazard by 1\.\d\d/);
+    expect(drivers.omitted.map((o) => o.key)).toEqual(['log10Peclet']);
+    // A recipe has no height of its own: its prediction is for a sample of the samples' median height.
+    const heights = samples.map((s) => s.sampleHeightMm!).sort((a, b) => a - b);
+    expect(drivers.typical.sampleHeightMm).toBeCloseTo((heights[299] + heights[300]) / 2, 12);
+    const predicted = result.recipes.find((r) => r.predicted?.medianDays !== null)!.predicted!;
+    expect(predicted.reading).toMatch(/, for a sample filled to the programme's typical \d+(\.\d+)? mm$/);
+  });
+
+  it('leaves the sample height out, counting the samples without one, when a single sample lacks it', () => {
+    const { recipes, samples } = inventedProgramme(12, 60, 10, 0.03);
+    const [first, ...rest] = samples;
+    const { drivers } = programmeShelfLife(recipes, [{ ...first, sampleHeightMm: null }, ...rest]);
+    expect(drivers.status).toBe('fitted');
+    expect(drivers.omitted).toContainEqual({ key: 'sampleHeightMm', label: 'sample height', why: 'not recorded on the bench log for 1 of 600 samples' });
+    if (drivers.status === 'fitted') expect(drivers.terms.map((t) => t.key)).not.toContain('sampleHeightMm');
   });
 
   it('refuses the fit in plain words with fewer than 10 collapses, and still gives every curve', () => {

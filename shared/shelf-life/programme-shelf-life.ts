@@ -3,7 +3,7 @@ import { describeSurvival } from './describe-survival';
 import { kaplanMeier } from './kaplan-meier';
 import { medianTimeToCollapse } from './median-time-to-collapse';
 import { similarRecipeGroups, SIMILAR_RECIPE_DISTANCE } from './similar-recipe-groups';
-import { describePrediction, fitShelfLifeModel, modelMedianDays, type ShelfLifeCovariates, type ShelfLifeModel } from './shelf-life-model';
+import { describePrediction, fitShelfLifeModel, modelMedianDays, type ShelfLifeModel, type ShelfLifeRecipeCovariates } from './shelf-life-model';
 import type { MedianTimeToCollapse, SurvivalCurve, SurvivalRecord } from './types';
 
 /** A live recipe of the programme as the analysis reads it. */
@@ -18,12 +18,14 @@ export interface ShelfLifeRecipeInput {
   position: { x: number; u: number } | null;
   /** The recipe's predicted state: the map region it lies in (null: not predicted). */
   region: PredictedState | null;
-  covariates: ShelfLifeCovariates;
+  covariates: ShelfLifeRecipeCovariates;
 }
 
 /** One sample of a recipe (one mixing date): collapsed at an age, or last seen standing. */
 export interface ShelfLifeSampleInput extends SurvivalRecord {
   recipeId: number;
+  /** Its fill height (mm), the latest recorded among its checks; absent or null when never recorded. */
+  sampleHeightMm?: number | null;
 }
 
 export type ShelfLifeRegion = PredictedState | 'unpredicted';
@@ -165,7 +167,7 @@ function summarise(records: readonly SurvivalRecord[]): SurvivalSummary {
 
 /**
  * The programme's model of what drives collapse alone (fitShelfLifeModel on every sample with its
- * recipe's covariates), for callers that need no curves, such as the planner.
+ * recipe's covariates and its own height), for callers that need no curves, such as the planner.
  */
 export function programmeShelfLifeModel(recipes: readonly ShelfLifeRecipeInput[], samples: readonly ShelfLifeSampleInput[]): ShelfLifeModel {
   return fitShelfLifeModel(modelRecordsOf(recipes, samples));
@@ -175,6 +177,6 @@ function modelRecordsOf(recipes: readonly ShelfLifeRecipeInput[], samples: reado
   const byId = new Map(recipes.map((r) => [r.id, r]));
   return samples.flatMap((s) => {
     const recipe = byId.get(s.recipeId);
-    return recipe ? [{ timeDays: s.timeDays, collapsed: s.collapsed, covariates: recipe.covariates }] : [];
+    return recipe ? [{ timeDays: s.timeDays, collapsed: s.collapsed, covariates: { ...recipe.covariates, sampleHeightMm: s.sampleHeightMm ?? null } }] : [];
   });
 }

@@ -3,14 +3,27 @@ import { CoxFitRefused, MIN_COX_EVENTS, type CoxRefusalReason } from './cox-fit-
 import { coxProportionalHazards, type CoxCovariate, type CoxTerm } from './cox-proportional-hazards';
 import { predictedMedianDays, predictedSurvivalAt } from './predicted-survival';
 
-/** What a programme's shelf-life model is fitted on: attraction depth, φ and gravity against thermal motion. */
+/**
+ * What a programme's shelf-life model is fitted on: attraction depth, φ and gravity against
+ * thermal motion (the recipe's), and the sample's fill height (the bench's, per sample: taller
+ * samples of a weak gel collapse sooner, Starrs et al. 2002).
+ */
 export const SHELF_LIFE_COVARIATES = [
   { key: 'attractionKt', label: 'attraction', unit: 'kT', step: 1 },
   { key: 'phi', label: 'φ', unit: '', step: 0.01 },
   { key: 'log10Peclet', label: 'log₁₀ gravitational Péclet number', unit: '', step: 1 },
+  { key: 'sampleHeightMm', label: 'sample height', unit: 'mm', step: 10 },
 ] as const satisfies readonly CoxCovariate[];
 export type ShelfLifeCovariateKey = (typeof SHELF_LIFE_COVARIATES)[number]['key'];
 export type ShelfLifeCovariates = Record<ShelfLifeCovariateKey, number | null>;
+/** The covariates a recipe carries (from its derivation); the fill height belongs to each sample. */
+export type ShelfLifeRecipeCovariates = Omit<ShelfLifeCovariates, 'sampleHeightMm'>;
+
+/**
+ * How a covariate unknown for some samples is spoken of: a recipe's quantity is "not known"; a
+ * sample's height, which the bench gives or not, is "not recorded on the bench log".
+ */
+const MISSING_WORDS: Partial<Record<ShelfLifeCovariateKey, string>> = { sampleHeightMm: 'not recorded on the bench log' };
 
 /** A covariate the fit left out, and why in plain words. */
 export interface OmittedCovariate {
@@ -19,14 +32,11 @@ export interface OmittedCovariate {
   why: string;
 }
 
-/** Sample height drives collapse (Starrs et al. 2002) but the bench log does not record it. */
-export const SAMPLE_HEIGHT_OMITTED: OmittedCovariate = { key: 'sampleHeightMm', label: 'sample height', why: 'not recorded on the bench log, so the fit cannot use it' };
-
-/** One sample as the model reads it. */
+/** One sample as the model reads it; a covariate absent or null is unknown for that sample. */
 export interface ShelfLifeModelRecord {
   timeDays: number;
   collapsed: boolean;
-  covariates: ShelfLifeCovariates;
+  covariates: Partial<ShelfLifeCovariates>;
 }
 
 interface ModelCommon {
@@ -58,7 +68,8 @@ export type ShelfLifeModel = ShelfLifeModelFitted | ShelfLifeModelRefused;
 /**
  * A programme's model of what drives collapse: coxProportionalHazards on the covariates of
  * SHELF_LIFE_COVARIATES that every sample has and that vary across the samples (the others are
- * listed in `omitted` with the reason, as is sample height, which is not recorded), then
+ * listed in `omitted` with the reason: so sample height is used only when every sample in the
+ * fit has a recorded height, and otherwise left out with the count of samples without one), then
  * Breslow's baseline (breslowBaselineHazard) for predictions. Refusals (too few collapses,
  * nothing varying, separation) come back as `status: 'refused'` with CoxFitRefused's words, not
  * as an exception, so a caller can show them.
@@ -70,14 +81,13 @@ export function fitShelfLifeModel(records: readonly ShelfLifeModelRecord[]): She
   const omitted: OmittedCovariate[] = [];
   const used: CoxCovariate[] = [];
   for (const covariate of SHELF_LIFE_COVARIATES) {
-    const values = records.map((r) => r.covariates[covariate.key]);
+    const values = records.map((r) => r.covariates[covariate.key] ?? null);
     const missing = values.filter((v) => v === null || !Number.isFinite(v)).length;
-    if (missing > 0) omitted.push({ key: covariate.key, label: covariate.label, why: `not known for ${missing} of ${records.length} samples` });
+    if (missing > 0) omitted.push({ key: covariate.key, label: covariate.label, why: `${MISSING_WORDS[covariate.key] ?? 'not known'} for ${missing} of ${records.length} samples` });
     else if (records.length > 0 && values.every((v) => Math.abs((v as number) - (values[0] as number)) <= 1e-12 * Math.max(1, Math.abs(values[0] as number)))) {
       omitted.push({ key: covariate.key, label: covariate.label, why: `the same (${Number((values[0] as number).toPrecision(3))}) in every sample` });
     } else used.push(covariate);
   }
-  omitted.push(SAMPLE_HEIGHT_OMITTED);
   const common = { sampleCount: records.length, eventCount, lastTimeDays, omitted };
   if (eventCount < MIN_COX_EVENTS || used.length === 0) {
     const message = eventCount < MIN_COX_EVENTS
@@ -118,11 +128,17 @@ export function valuesFor(model: ShelfLifeModelFitted, covariates: Partial<Shelf
   return values;
 }
 
-/** The model's prediction in words, e.g. "the model predicts half collapsed by 40 days". */
+/**
+ * The model's prediction in words for a recipe, e.g. "the model predicts half collapsed by 40
+ * days". A recipe has no fill height of its own: when the model uses the height, the words say
+ * the prediction is for a sample of the programme's typical (median) height.
+ */
 export function describePrediction(model: ShelfLifeModelFitted, medianDays: number | null): string {
-  return medianDays === null
+  const words = medianDays === null
     ? `the model predicts more than half still standing at ${model.lastTimeDays} days, the longest the bench has watched`
     : `the model predicts half collapsed by ${medianDays} days`;
+  const height = model.typical.sampleHeightMm;
+  return height === undefined ? words : `${words}, for a sample filled to the programme's typical ${Number(height.toPrecision(3))} mm`;
 }
 
 function median(values: number[]): number {

@@ -17,7 +17,7 @@ export interface ShelfLifeVerdict {
  * and cannot be judged beyond it.
  * @example shelfLifeVerdict(model, { attractionKt: 5, phi: 0.2, log10Peclet: null }, 30) // with H₀ = 0.2, 0.7, 1.5 at 10, 20, 40 d centred there: { medianDays: 20, survivalAtMinimum: 0.4966, meets: false }
  */
-export function shelfLifeVerdict(model: ShelfLifeModelFitted, covariates: ShelfLifeCovariates, minimumDays: number | null): ShelfLifeVerdict {
+export function shelfLifeVerdict(model: ShelfLifeModelFitted, covariates: Partial<ShelfLifeCovariates>, minimumDays: number | null): ShelfLifeVerdict {
   const medianDays = modelMedianDays(model, covariates);
   if (minimumDays === null) return { medianDays, survivalAtMinimum: null, meets: null };
   const survivalAtMinimum = modelSurvivalAt(model, covariates, minimumDays);

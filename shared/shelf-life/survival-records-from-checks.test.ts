@@ -13,7 +13,23 @@ describe('survivalRecordsFromChecks', () => {
       { mixedAt: '2026-02-01T00:00:00.000Z', ageDays: 14, observedState: 'gel' },
       { mixedAt: '2026-02-01T00:00:00.000Z', ageDays: 28, observedState: 'unclear' },
     ]);
-    expect(records).toEqual([{ timeDays: 21, collapsed: true }, { timeDays: 28, collapsed: false }]);
+    expect(records).toEqual([{ timeDays: 21, collapsed: true, sampleHeightMm: null }, { timeDays: 28, collapsed: false, sampleHeightMm: null }]);
+  });
+
+  it('gives each sample the latest fill height recorded among its checks (docs/shelf-life.md), null when none was', () => {
+    const records = survivalRecordsFromChecks([
+      { mixedAt: '2026-04-01', ageDays: 1, observedState: 'gel', sampleHeightMm: 40 },
+      { mixedAt: '2026-04-01', ageDays: 14, observedState: 'gel', sampleHeightMm: 42 },
+      { mixedAt: '2026-04-01', ageDays: 28, observedState: 'collapsed' },
+      { mixedAt: '2026-04-01', ageDays: 7, observedState: 'gel', sampleHeightMm: 39 },
+      { mixedAt: '2026-04-08', ageDays: 3, observedState: 'gel', sampleHeightMm: 61 },
+      { mixedAt: '2026-04-15', ageDays: 3, observedState: 'gel', sampleHeightMm: null },
+    ]);
+    expect(records).toEqual([
+      { timeDays: 28, collapsed: true, sampleHeightMm: 42 },
+      { timeDays: 3, collapsed: false, sampleHeightMm: 61 },
+      { timeDays: 3, collapsed: false, sampleHeightMm: null },
+    ]);
   });
 
   it('leaves out samples never seen as a gel or collapsed, and checks without a usable age', () => {

@@ -1,4 +1,5 @@
 import type { ObservedState } from '../states';
+import { latestSampleHeightMm } from './latest-sample-height';
 import type { SurvivalRecord } from './types';
 
 /** One bench check of a sample: when the sample was mixed, its age at the check, what was seen. */
@@ -7,6 +8,15 @@ export interface SampleCheck {
   mixedAt: string;
   ageDays: number;
   observedState: ObservedState;
+  /** The fill height recorded at this check (mm), if any. */
+  sampleHeightMm?: number | null;
+  /** The check's record id, when known: breaks ties between checks at the same age. */
+  observationId?: number;
+}
+
+/** A sample's survival record with its fill height (latestSampleHeightMm; null when never recorded). */
+export interface SampleSurvivalRecord extends SurvivalRecord {
+  sampleHeightMm: number | null;
 }
 
 /**
@@ -17,28 +27,31 @@ export interface SampleCheck {
  * collapsed (an event), or else the last age at which it was checked (right-censored: it stood
  * at least that long). An "unclear" check still proves the sample was watched up to that age.
  * Common practice of survival analysis (Klein & Moeschberger, Survival Analysis, 2nd ed. (2003),
- * §1.2: right censoring at the last follow-up).
+ * §1.2: right censoring at the last follow-up). Its fill height is the latest one recorded among
+ * its checks (latestSampleHeightMm), or null.
  * @example survivalRecordsFromChecks([
- *   { mixedAt: '2026-01-05', ageDays: 7, observedState: 'gel' },
+ *   { mixedAt: '2026-01-05', ageDays: 7, observedState: 'gel', sampleHeightMm: 40 },
  *   { mixedAt: '2026-01-05', ageDays: 21, observedState: 'collapsed' },
  *   { mixedAt: '2026-02-01', ageDays: 14, observedState: 'gel' },
- * ]) // [{ timeDays: 21, collapsed: true }, { timeDays: 14, collapsed: false }]
+ * ]) // [{ timeDays: 21, collapsed: true, sampleHeightMm: 40 }, { timeDays: 14, collapsed: false, sampleHeightMm: null }]
  */
-export function survivalRecordsFromChecks(checks: readonly SampleCheck[]): SurvivalRecord[] {
-  const samples = new Map<string, { gelled: boolean; firstCollapse: number; lastCheck: number }>();
+export function survivalRecordsFromChecks(checks: readonly SampleCheck[]): SampleSurvivalRecord[] {
+  const samples = new Map<string, { gelled: boolean; firstCollapse: number; lastCheck: number; checks: SampleCheck[] }>();
   for (const check of checks) {
     if (!(check.ageDays >= 0) || !Number.isFinite(check.ageDays)) continue;
     const key = check.mixedAt.slice(0, 10);
-    const sample = samples.get(key) ?? { gelled: false, firstCollapse: Infinity, lastCheck: -Infinity };
+    const sample = samples.get(key) ?? { gelled: false, firstCollapse: Infinity, lastCheck: -Infinity, checks: [] };
     if (check.observedState === 'gel' || check.observedState === 'collapsed') sample.gelled = true;
     if (check.observedState === 'collapsed') sample.firstCollapse = Math.min(sample.firstCollapse, check.ageDays);
     sample.lastCheck = Math.max(sample.lastCheck, check.ageDays);
+    sample.checks.push(check);
     samples.set(key, sample);
   }
-  const records: SurvivalRecord[] = [];
+  const records: SampleSurvivalRecord[] = [];
   for (const sample of samples.values()) {
     if (!sample.gelled) continue;
-    records.push(sample.firstCollapse < Infinity ? { timeDays: sample.firstCollapse, collapsed: true } : { timeDays: sample.lastCheck, collapsed: false });
+    const sampleHeightMm = latestSampleHeightMm(sample.checks);
+    records.push(sample.firstCollapse < Infinity ? { timeDays: sample.firstCollapse, collapsed: true, sampleHeightMm } : { timeDays: sample.lastCheck, collapsed: false, sampleHeightMm });
   }
   return records;
 }

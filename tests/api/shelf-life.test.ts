@@ -18,7 +18,7 @@ let lib: Library;
 let agents: Awaited<ReturnType<typeof agentsForEveryRole>>;
 let enough: { id: number };
 let few: { id: number };
-const recorded = new Map<number, { timeDays: number; collapsed: boolean }[]>();
+const recorded = new Map<number, { timeDays: number; collapsed: boolean; sampleHeightMm: number | null }[]>();
 const recipes: RecipeView[] = [];
 
 /** Product-limit estimate as a plain loop over distinct collapse times (Kaplan & Meier 1958). */
@@ -27,14 +27,22 @@ function naiveProductLimit(records: { timeDays: number; collapsed: boolean }[], 
   return times.reduce((s, time) => s * (1 - records.filter((r) => r.collapsed && r.timeDays === time).length / records.filter((r) => r.timeDays >= time).length), 1);
 }
 
-/** One sample: a gel check at day 2, then collapsed at `timeDays` or still a gel there. */
-async function recordSample(recipeId: number, mixedAt: string, timeDays: number, collapsed: boolean) {
-  for (const [ageDays, observedState] of [[2, 'gel'], [timeDays, collapsed ? 'collapsed' : 'gel']] as const) {
-    const response = await agents.scientist.agent.post('/api/observations').send({ recipeId, mixedAt, ageDays, observedState, method: 'visual' });
+/**
+ * One sample: a gel check at day 2, then collapsed at `timeDays` or still a gel there. With
+ * `heights`, the first check records the fill height and the last one, when given, a corrected
+ * height; the sample's height is the latest recorded (docs/shelf-life.md), else the first.
+ */
+async function recordSample(recipeId: number, mixedAt: string, timeDays: number, collapsed: boolean, heights?: { first: number; corrected?: number }) {
+  const checks = [
+    { ageDays: 2, observedState: 'gel', sampleHeightMm: heights?.first },
+    { ageDays: timeDays, observedState: collapsed ? 'collapsed' : 'gel', sampleHeightMm: heights?.corrected },
+  ];
+  for (const check of checks) {
+    const response = await agents.scientist.agent.post('/api/observations').send({ recipeId, mixedAt, method: 'visual', ...check });
     expect(response.status).toBe(201);
   }
   const list = recorded.get(recipeId) ?? [];
-  list.push({ timeDays, collapsed });
+  list.push({ timeDays, collapsed, sampleHeightMm: heights ? heights.corrected ?? heights.first : null });
   recorded.set(recipeId, list);
 }
 
@@ -45,6 +53,8 @@ beforeAll(async () => {
   const programme = await buildProgramme({ name: 'Shelf-life route test', goalState: 'gel' });
   enough = programme;
   const random = seededRandom(1414);
+  // Invented fill heights, 20–80 mm, from their own sequence (the collapse times stay as they were).
+  const heightRandom = seededRandom(2002);
   // Eight recipes of rising polymer dose (stronger attraction); invented collapse hazard falls with it.
   for (let i = 0; i < 8; i++) {
     const created = await agents.formulator.agent.post('/api/recipes').send(recipeInput(programme, lib, { fraction: { kind: 'volume', value: 0.12 + 0.01 * i }, attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 6 + 1.5 * i } }));
@@ -55,7 +65,9 @@ beforeAll(async () => {
     for (let s = 0; s < 4; s++) {
       const collapseDay = 3 + Math.ceil(-Math.log(1 - random()) * 8 * (1 + index / 2));
       const lastCheck = 20 + Math.floor(random() * 40);
-      await recordSample(recipe.id, `2026-0${1 + s}-1${index}`, Math.min(collapseDay, lastCheck), collapseDay <= lastCheck);
+      const first = 20 + Math.round(heightRandom() * 60);
+      // Every fourth sample's height is corrected at its last check.
+      await recordSample(recipe.id, `2026-0${1 + s}-1${index}`, Math.min(collapseDay, lastCheck), collapseDay <= lastCheck, { first, corrected: s === 3 ? first + 3 : undefined });
     }
   }
   few = await buildProgramme({ name: 'Shelf-life route test, little bench' });
@@ -85,7 +97,7 @@ describe('GET /api/programmes/:id/shelf-life', () => {
     expect(other.status).toBe(404);
   });
 
-  it('gives each recipe the product-limit curve of the samples the bench recorded for it, and the fit of what drives collapse', async () => {
+  it('gives each recipe the product-limit curve of the samples the bench recorded for it, and the fit of what drives collapse with each sample\'s latest height', async () => {
     const response = await agents.formulator.agent.get(`/api/programmes/${enough.id}/shelf-life`);
     expect(response.status).toBe(200);
     const body = response.body as ProgrammeShelfLifeView;
@@ -101,13 +113,21 @@ describe('GET /api/programmes/:id/shelf-life', () => {
     expect(body.drivers.status).toBe('fitted');
     if (body.drivers.status !== 'fitted') return;
     // The same fit from the recipes' stored derivation as the recipe route presents it.
-    const expected = fitShelfLifeModel(recipes.flatMap((r) => recorded.get(r.id)!.map((s) => ({ ...s, covariates: { attractionKt: r.derived.contactEnergyKT, phi: r.derived.phi, log10Peclet: Math.log10(r.derived.timescales.gravitationalPeclet!) } }))));
+    const expected = fitShelfLifeModel(
+      recipes.flatMap((r) =>
+        recorded.get(r.id)!.map((s) => ({
+          ...s,
+          covariates: { attractionKt: r.derived.contactEnergyKT, phi: r.derived.phi, log10Peclet: Math.log10(r.derived.timescales.gravitationalPeclet!), sampleHeightMm: s.sampleHeightMm },
+        })),
+      ),
+    );
     expect(expected.status).toBe('fitted');
     if (expected.status !== 'fitted') return;
     expect(body.drivers.terms.map((t) => t.key)).toEqual(expected.terms.map((t) => t.key));
     body.drivers.terms.forEach((t, i) => expect(t.coefficient).toBeCloseTo(expected.terms[i].coefficient, 9));
-    // One particle system: the Péclet number does not vary; sample height is not recorded.
-    expect(body.drivers.omitted.map((o) => o.key)).toEqual(['log10Peclet', 'sampleHeightMm']);
+    // Every sample has a height, so the fit uses it, per 10 mm; one particle system: the Péclet number does not vary.
+    expect(body.drivers.terms.find((t) => t.key === 'sampleHeightMm')).toMatchObject({ label: 'sample height', unit: 'mm', step: 10, reading: expect.stringMatching(/^each \+10 mm of sample height multiplies the collapse hazard by /) });
+    expect(body.drivers.omitted.map((o) => o.key)).toEqual(['log10Peclet']);
     expect(body.context).toMatch(/Starrs, Poon, Hibberd & Robins.*Manley et al\./);
   });
 
@@ -126,7 +146,7 @@ describe('GET /api/programmes/:id/shelf-life', () => {
     const inRegion = recipes.filter((r) => (r.derived.predictedState ?? 'unpredicted') === region.region).flatMap((r) => recorded.get(r.id)!);
     expect(region.curve.sampleCount).toBe(inRegion.length);
     for (const step of region.curve.steps) expect(step.survival).toBeCloseTo(naiveProductLimit(inRegion, step.timeDays), 12);
-    expect(body.recipes[0].predicted?.reading).toMatch(/^the model predicts /);
+    expect(body.recipes[0].predicted?.reading).toMatch(/^the model predicts .*, for a sample filled to the programme's typical [\d.]+ mm$/);
   });
 
   it('refuses the fit in plain words when the programme has seen too few collapses, and still gives the curves', async () => {
@@ -134,6 +154,8 @@ describe('GET /api/programmes/:id/shelf-life', () => {
     expect(response.status).toBe(200);
     const body = response.body as ProgrammeShelfLifeView;
     expect(body.drivers).toMatchObject({ status: 'refused', reason: 'too-few-events', message: 'Cannot fit what drives collapse: 2 collapses seen; at least 10 are needed.' });
+    // None of its samples has a recorded height.
+    expect(body.drivers.omitted).toContainEqual({ key: 'sampleHeightMm', label: 'sample height', why: 'not recorded on the bench log for 3 of 3 samples' });
     expect(body.recipes[0].summary).toMatch(/^half collapsed by 15 days/);
   });
 });

@@ -41,6 +41,8 @@ beforeAll(async () => {
   agedProgrammeId = aged.id;
   const formulatorAgent = await signedInAgent(suite.stack.app, formulator);
   const random = seededRandom(1414);
+  // Invented fill heights (20–80 mm), recorded at each sample's first check, from their own sequence.
+  const heights = seededRandom(2002);
   for (let i = 0; i < 8; i++) {
     const recipe = await formulatorAgent.post('/api/recipes').send(recipeInput(aged, lib, { fraction: { kind: 'volume', value: 0.12 + 0.01 * i }, attraction: { source: 'depletion', depletantId: lib.depletant.id, concentrationGL: 6 + 1.5 * i } }));
     expect(recipe.status).toBe(201);
@@ -48,8 +50,9 @@ beforeAll(async () => {
       const collapseDay = 3 + Math.ceil(-Math.log(1 - random()) * 8 * (1 + i / 2));
       const lastCheck = 20 + Math.floor(random() * 40);
       const end = Math.min(collapseDay, lastCheck);
+      const sampleHeightMm = 20 + Math.round(60 * heights());
       for (const [ageDays, observedState] of [[2, 'gel'], [end, collapseDay <= lastCheck ? 'collapsed' : 'gel']] as const) {
-        const check = await scientist.post('/api/observations').send({ recipeId: recipe.body.recipe.id, mixedAt: `2026-0${1 + s}-1${i}`, ageDays, observedState, method: 'visual' });
+        const check = await scientist.post('/api/observations').send({ recipeId: recipe.body.recipe.id, mixedAt: `2026-0${1 + s}-1${i}`, ageDays, observedState, method: 'visual', ...(ageDays === 2 ? { sampleHeightMm } : {}) });
         expect(check.status).toBe(201);
       }
     }
@@ -75,7 +78,8 @@ describe('shelf life on the recipe page', () => {
     // Two collapses are far below the ten a proportional-hazards fit needs (MIN_COX_EVENTS).
     const drivers = page.getByTestId('collapse-drivers');
     expect(await drivers.getByTestId('collapse-drivers-refused').textContent()).toContain('Cannot fit what drives collapse: 2 collapses seen; at least 10 are needed.');
-    expect(await drivers.textContent()).toMatch(/sample height \(not recorded on the bench log.*Starrs, Poon, Hibberd & Robins/);
+    // No check of its three samples gave a fill height, so the (refused) fit would leave it out.
+    expect(await drivers.textContent()).toMatch(/sample height \(not recorded on the bench log for 3 of 3 samples\).*Starrs, Poon, Hibberd & Robins/);
     await page.getByText("Where this map's lines come from").click();
     expect(await page.getByTestId('line-sources').textContent()).toContain('mode-coupling');
     expect(await seriousAccessibilityViolations(page)).toEqual([]);
@@ -93,6 +97,8 @@ describe('shelf life on the recipe page', () => {
     const key = page.getByTestId('shelf-life-key');
     await key.waitFor();
     expect(await key.textContent()).toMatch(/Predicted median days to collapse.*too thin.*Cox model/);
+    // Every sample of this programme has a fill height, so the model uses it and the layer holds it at the typical one.
+    expect(await key.textContent()).toMatch(/sample height at the programme's typical \d+(\.\d+)? mm/);
     expect(await page.getByTestId('shelf-life-layer').locator('rect').count()).toBeGreaterThan(100);
     await screenshot(page, 'map-shelf-life-layer');
     // The first programme has two collapses: the layer is off and says why.

@@ -61,4 +61,18 @@ describe('shelfLifeLayer', () => {
     expect(fillForMedian(null)).toBe(BEYOND_BENCH_FILL);
     expect(layer.typicalNote).toBe('no other quantity in the model');
   });
+
+  it('names the other quantities of the model at their typical values with their units (a sample height of 45 mm)', () => {
+    const height = { key: 'sampleHeightMm', label: 'sample height', unit: 'mm', step: 10 } as ShelfLifeModelFitted['terms'][number];
+    const withHeight: ShelfLifeModelFitted = {
+      ...MODEL,
+      terms: [height],
+      coefficients: { ...MODEL.coefficients, sampleHeightMm: 0 },
+      baseline: { ...MODEL.baseline, centre: { ...MODEL.baseline.centre, sampleHeightMm: 45 } },
+      typical: { ...MODEL.typical, sampleHeightMm: 45 },
+    };
+    const layer = shelfLifeLayer(withHeight, map, [[0.407, 5.5]], { columns: 4, rows: 4 });
+    if (layer.status !== 'on') throw new Error('layer should be on');
+    expect(layer.typicalNote).toBe("sample height at the programme's typical 45 mm");
+  });
 });

@@ -106,7 +106,12 @@ export function shelfLifeLayer(
   }
   const typical = Object.entries(model.typical).filter(([key]) => key !== 'attractionKt' && key !== 'phi');
   const typicalNote = typical.length
-    ? `${typical.map(([key, value]) => `${model.terms.find((t) => t.key === key)?.label ?? key} at the programme's typical ${Number(value.toPrecision(3))}`).join(', ')}`
+    ? `${typical
+        .map(([key, value]) => {
+          const term = model.terms.find((t) => t.key === key);
+          return `${term?.label ?? key} at the programme's typical ${Number(value.toPrecision(3))}${term?.unit ? ` ${term.unit}` : ''}`;
+        })
+        .join(', ')}`
     : 'no other quantity in the model';
   return { status: 'on', cells, attractionNote: attractionNote(map.model), typicalNote, lastTimeDays: model.lastTimeDays };
 }
