@@ -54,7 +54,7 @@ export async function setCheckSchedule(ctx: Ctx, recipeId: number, input: CheckS
  * Every live check of the programme's live recipes that have a schedule, with each recipe's
  * schedule: the input of dueSamples. One statement; archived checks and recipes are left out.
  */
-const SCHEDULED_CHECKS = `SELECT o.id AS observation_id, o.recipe_id, o.mixed_at, o.age_days, o.observed_state, s.ages_days
+const SCHEDULED_CHECKS = `SELECT o.id AS observation_id, o.recipe_id, o.mixed_at, o.age_days, o.observed_state, o.sample_height_mm, s.ages_days
   FROM check_schedules s
   JOIN recipes r ON r.id = s.recipe_id AND r.archived_at IS NULL AND r.programme_id = ?
   JOIN observations o ON o.recipe_id = s.recipe_id AND o.archived_at IS NULL`;
@@ -66,14 +66,21 @@ const SCHEDULED_CHECKS = `SELECT o.id AS observation_id, o.recipe_id, o.mixed_at
 export async function listDueChecks(programmeId: number, limit: number, now: Date): Promise<DueChecksView> {
   const programme = await Programme.findByPk(programmeId, { attributes: ['id'] });
   if (!programme) throw badRequest('programme: no such programme', 'programme');
-  const rows = await CheckSchedule.sequelize!.query<{ observation_id: number; recipe_id: number; mixed_at: Date | string; age_days: number; observed_state: ObservedState; ages_days: unknown }>(SCHEDULED_CHECKS, {
+  const rows = await CheckSchedule.sequelize!.query<{ observation_id: number; recipe_id: number; mixed_at: Date | string; age_days: number; observed_state: ObservedState; sample_height_mm: number | null; ages_days: unknown }>(SCHEDULED_CHECKS, {
     type: QueryTypes.SELECT,
     replacements: [programme.id],
   });
   const schedules = new Map<number, number[]>();
   const checks: ScheduledCheck[] = rows.map((row) => {
     if (!schedules.has(row.recipe_id)) schedules.set(row.recipe_id, agesOf(row.ages_days));
-    return { observationId: row.observation_id, recipeId: row.recipe_id, mixedAt: new Date(row.mixed_at).toISOString(), ageDays: Number(row.age_days), observedState: row.observed_state };
+    return {
+      observationId: row.observation_id,
+      recipeId: row.recipe_id,
+      mixedAt: new Date(row.mixed_at).toISOString(),
+      ageDays: Number(row.age_days),
+      observedState: row.observed_state,
+      sampleHeightMm: row.sample_height_mm === null ? null : Number(row.sample_height_mm),
+    };
   });
   const due = dueSamples(checks, schedules, now);
   const shown = due.slice(0, limit);

@@ -49,9 +49,20 @@ describe('dueSamples', () => {
     expect(due).toEqual([
       // Recipe 1, 1 June: its two mixing times that day are one sample (as survivalRecordsFromChecks groups them);
       // the last check is the 7-day one.
-      { recipeId: 1, mixedAt: '2026-06-01T00:00:00.000Z', lastCheck: { observationId: 2, ageDays: 7, observedState: 'gel' }, dueAgeDays: 14, ageTodayDays: 19 },
-      { recipeId: 2, mixedAt: '2026-06-18T00:00:00.000Z', lastCheck: { observationId: checks[7].observationId, ageDays: 0, observedState: 'fluid' }, dueAgeDays: 1, ageTodayDays: 2 },
+      { recipeId: 1, mixedAt: '2026-06-01T00:00:00.000Z', lastCheck: { observationId: 2, ageDays: 7, observedState: 'gel' }, sampleHeightMm: null, dueAgeDays: 14, ageTodayDays: 19 },
+      { recipeId: 2, mixedAt: '2026-06-18T00:00:00.000Z', lastCheck: { observationId: checks[7].observationId, ageDays: 0, observedState: 'fluid' }, sampleHeightMm: null, dueAgeDays: 1, ageTodayDays: 2 },
     ]);
+  });
+
+  it('carries the sample\'s latest recorded fill height, even when its last check gave none (the rule of docs/shelf-life.md)', () => {
+    const checks = [
+      { ...check(5, '2026-06-01T00:00:00.000Z', 1), sampleHeightMm: 45 },
+      { ...check(5, '2026-06-01T00:00:00.000Z', 3), sampleHeightMm: 47 },
+      check(5, '2026-06-01T00:00:00.000Z', 7),
+      { ...check(5, '2026-06-02T00:00:00.000Z', 7), sampleHeightMm: 30 },
+    ];
+    const due = dueSamples(checks, new Map([[5, SCHEDULE]]), now);
+    expect(due.map((d) => [d.mixedAt.slice(0, 10), d.lastCheck.ageDays, d.sampleHeightMm])).toEqual([['2026-06-01', 7, 47], ['2026-06-02', 7, 30]]);
   });
 
   it('stops once the schedule is used up, and counts an off-schedule check as the last one', () => {

@@ -16,6 +16,8 @@ export interface DueCheckView {
   /** The mixing date as stored; a check recorded against it joins the same sample. */
   mixedAt: string;
   lastCheck: { observationId: number; ageDays: number; observedState: ObservedState };
+  /** The sample's fill height (mm), the latest recorded among its checks; null when never recorded. */
+  sampleHeightMm: number | null;
   /** The scheduled age that has come (days after mixing). */
   dueAgeDays: number;
   /** Whole days since mixing, as of `asOf`: the age a check recorded now carries. */

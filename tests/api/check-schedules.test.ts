@@ -32,8 +32,8 @@ async function newRecipe(programme: Programme, name = 'Scheduled gel') {
   return response.body.recipe as { id: number; code: string; version: number };
 }
 
-async function record(recipeId: number, mixedAt: string, ageDays: number, observedState = 'gel') {
-  const response = await scientist.post('/api/observations').send({ recipeId, mixedAt, ageDays, observedState, method: 'visual' });
+async function record(recipeId: number, mixedAt: string, ageDays: number, observedState = 'gel', extra: Record<string, unknown> = {}) {
+  const response = await scientist.post('/api/observations').send({ recipeId, mixedAt, ageDays, observedState, method: 'visual', ...extra });
   expect(response.status).toBe(201);
   return response.body.observation as { id: number };
 }
@@ -103,7 +103,7 @@ describe('the due list (service, at fixed dates)', () => {
     const scheduled = await newRecipe(programme, 'Scheduled');
     const unscheduled = await newRecipe(programme, 'No schedule');
     await scientist.put(`/api/recipes/${scheduled.id}/check-schedule`).send({ agesDays: [1, 3, 7, 14, 28, 56] });
-    await record(scheduled.id, '2026-03-01', 1);
+    await record(scheduled.id, '2026-03-01', 1, 'gel', { sampleHeightMm: 40 }); // filled to 40 mm; not given again
     const seventh = await record(scheduled.id, '2026-03-01', 7); // next: 14
     await record(scheduled.id, '2026-03-10', 3); // next: 7
     await record(scheduled.id, '2026-03-05', 3);
@@ -116,7 +116,7 @@ describe('the due list (service, at fixed dates)', () => {
     const march16 = await listDueChecks(programme.id, 50, new Date('2026-03-16T12:00:00Z'));
     expect(march16.total).toBe(1);
     expect(march16.items).toEqual([
-      { recipeId: scheduled.id, recipeCode: scheduled.code, recipeName: 'Scheduled', mixedAt: '2026-03-01T00:00:00.000Z', lastCheck: { observationId: seventh.id, ageDays: 7, observedState: 'gel' }, dueAgeDays: 14, ageTodayDays: 15 },
+      { recipeId: scheduled.id, recipeCode: scheduled.code, recipeName: 'Scheduled', mixedAt: '2026-03-01T00:00:00.000Z', lastCheck: { observationId: seventh.id, ageDays: 7, observedState: 'gel' }, sampleHeightMm: 40, dueAgeDays: 14, ageTodayDays: 15 },
     ]);
 
     // 20 March: 1 March is 19 days old (5 overdue), 10 March 10 (7-day check 3 overdue), 14 March 6 (3-day check 3 overdue).
@@ -141,17 +141,17 @@ describe('the due list (service, at fixed dates)', () => {
 });
 
 describe('GET /api/due-checks and the one-click record', () => {
-  it('records "still standing" once per key at today\'s age with the last state, and the sample leaves the list', async () => {
+  it('records "still standing" once per key at today\'s age with the last state and the sample\'s height, and the sample leaves the list', async () => {
     const programme = await buildProgramme();
     const recipe = await newRecipe(programme);
     await scientist.put(`/api/recipes/${recipe.id}/check-schedule`).send({ agesDays: [3, 7, 14] });
     const mixed = isoDaysAgo(10);
-    await record(recipe.id, mixed, 3);
+    await record(recipe.id, mixed, 3, 'gel', { sampleHeightMm: 35 });
     const due = await viewer.get(`/api/due-checks?programme=${programme.id}`);
     expect(due.status).toBe(200);
     expect(due.body.total).toBe(1);
     const item: DueCheckView = due.body.items[0];
-    expect(item).toMatchObject({ recipeCode: recipe.code, dueAgeDays: 7, ageTodayDays: 10, lastCheck: { ageDays: 3, observedState: 'gel' } });
+    expect(item).toMatchObject({ recipeCode: recipe.code, dueAgeDays: 7, ageTodayDays: 10, lastCheck: { ageDays: 3, observedState: 'gel' }, sampleHeightMm: 35 });
 
     const { input, idempotencyKey } = checkFromDue(item, 'standing');
     const before = await tableCounts(stack.sequelize);
@@ -161,7 +161,7 @@ describe('GET /api/due-checks and the one-click record', () => {
     expect(again.status).toBe(201);
     expect(again.headers['idempotent-replayed']).toBe('true');
     expect(again.body).toEqual(first.body);
-    expect(first.body.observation).toMatchObject({ recipeId: recipe.id, ageDays: 10, observedState: 'gel', method: 'visual' });
+    expect(first.body.observation).toMatchObject({ recipeId: recipe.id, ageDays: 10, observedState: 'gel', method: 'visual', sampleHeightMm: 35 });
     expect(first.body.observation.mixedAt.slice(0, 10)).toBe(mixed);
     expect((await tableCounts(stack.sequelize)).observations).toBe(before.observations + 1);
     // Next check is at 14 days; the sample is 10 days old: no longer due.
@@ -177,7 +177,8 @@ describe('GET /api/due-checks and the one-click record', () => {
     expect(item).toMatchObject({ dueAgeDays: 1, ageTodayDays: 5 });
     const { input, idempotencyKey } = checkFromDue(item, 'collapsed');
     const response = await scientist.post('/api/observations').set('Idempotency-Key', idempotencyKey).send(input);
-    expect(response.body.observation).toMatchObject({ observedState: 'collapsed', ageDays: 5 });
+    // No height was ever recorded for this sample, so none is carried.
+    expect(response.body.observation).toMatchObject({ observedState: 'collapsed', ageDays: 5, sampleHeightMm: null });
     expect((await scientist.get(`/api/due-checks?programme=${programme.id}`)).body.total).toBe(0);
     // The recipe's survival record is now an event at day 5 (not a censored one).
     const timeline = await viewer.get(`/api/observations?recipe=${recipe.id}`);
