@@ -5,7 +5,7 @@ import { medianTimeToCollapse } from '../../shared/shelf-life/median-time-to-col
 import { stiffeningWithAge } from '../../shared/shelf-life/stiffening-with-age';
 import { survivalRecordsFromChecks } from '../../shared/shelf-life/survival-records-from-checks';
 import { seededRandom } from '../../shared/seeded-random';
-import { DEMO_CHECK_AGES, demoAgeingSamples, demoCollapseScaleDays } from './demo-ageing';
+import { DEMO_CHECK_AGES, demoAgeingSamples, demoCollapseScaleDays, demoSampleHeightMm } from './demo-ageing';
 
 // The demo's ageing is invented; these checks hold it to what it claims to show: collapses
 // sooner for weak dilute gels, censoring at the last check, G′ rising (or for one recipe falling)
@@ -46,8 +46,8 @@ describe('demoAgeingSamples', () => {
     };
     const weak = pooled(WEAK, 3);
     const strong = pooled(STRONG, 4);
-    // Scale 12·e^{1.1(5.2−6)}·0.4^0.8 ≈ 2.4 days (the demo's own law): the weak median falls at an early check.
-    expect(demoCollapseScaleDays(WEAK.phi, WEAK.contactEnergyKT)).toBeCloseTo(12 * Math.exp(-0.88) * 0.4 ** 0.8, 10);
+    // Scale 12·e^{1.1(5.2−6)}·0.4^0.8 ≈ 2.4 days at 50 mm (the demo's own law): the weak median falls at an early check.
+    expect(demoCollapseScaleDays(WEAK.phi, WEAK.contactEnergyKT, 50)).toBeCloseTo(12 * Math.exp(-0.88) * 0.4 ** 0.8, 10);
     expect(medianTimeToCollapse(weak).timeDays).toBeLessThanOrEqual(7);
     expect(strong.collapseCount).toBe(0);
     expect(strong.sampleCount).toBe(120);
@@ -61,6 +61,16 @@ describe('demoAgeingSamples', () => {
       // 9 days → the 7-day check is due; 16 → 14; 30 → 28 (the latest schedule age reached).
       expect(due.map((d) => [d.ageTodayDays, d.dueAgeDays])).toEqual([[days, DEMO_CHECK_AGES.filter((a) => a <= days).at(-1)]]);
     }
+  });
+
+  it('fills each sample to its own height of 20–80 mm, and lets taller samples collapse sooner (the demo\'s law: scale ∝ (50 mm / H)^0.5)', () => {
+    const random = seededRandom(21);
+    const heights = Array.from({ length: 30 }, () => demoAgeingSamples(WEAK, random, 9)).flat().map((s) => s.sampleHeightMm);
+    expect(heights.every((h) => Number.isInteger(h) && h >= 20 && h <= 80)).toBe(true);
+    expect(new Set(heights).size).toBeGreaterThan(10);
+    expect([demoSampleHeightMm(() => 0), demoSampleHeightMm(() => 1)]).toEqual([20, 80]);
+    // (50/80)^0.5 / (50/20)^0.5 = 0.5: an 80 mm sample's scale is half a 20 mm one's (derived from the law).
+    expect(demoCollapseScaleDays(0.1, 6, 80) / demoCollapseScaleDays(0.1, 6, 20)).toBeCloseTo(0.5, 12);
   });
 
   it('gives G′ that stiffens with log age, or softens for the recipe marked so', () => {

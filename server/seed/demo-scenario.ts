@@ -13,7 +13,7 @@ import { materialsOfRecipe } from '../services/recipe-materials';
 import { deriveRecipe } from '../../shared/recipe-derivation';
 import { seededRandom } from '../../shared/seeded-random';
 import { demoMicrograph } from './micrograph';
-import { DEMO_CHECK_AGES, demoAgeingSamples } from './demo-ageing';
+import { DEMO_CHECK_AGES, demoAgeingSamples, demoSampleHeightMm } from './demo-ageing';
 
 /**
  * The invented scenario of Halden Brook Materials: a depletion-gel primer programme and a
@@ -127,9 +127,12 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
     crystal: ['glass', 'fluid'],
     separated: ['gel', 'fluid'],
   };
+  // Fill heights come from a stream of their own, so the rest of the invented bench is as it was.
+  const fillHeights = seededRandom(20020401);
   for (const recipe of recipes) {
     const truth = reality.get(recipe.id)!;
     const mixedAt = new Date(Date.UTC(2026, 5 + Math.floor(random() * 5), 1 + Math.floor(random() * 27)));
+    const sampleHeightMm = demoSampleHeightMm(fillHeights);
     // Near a boundary a sample can land either side; far from one it almost never does.
     const surprising = random() < 0.35 * Math.exp(-truth.margin / 0.05);
     const picked = ages.filter((age, i) => i === 0 || random() < 0.75);
@@ -154,6 +157,8 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
             storageModulusPa: method === 'rheology' ? Math.round(4 + 900 * recipe.phi ** 2.5 * (1 + random())) : null,
             yieldStressPa: method === 'rheology' ? Math.round(10 * (0.2 + 30 * recipe.phi ** 2.2) * (1 + random())) / 10 : null,
             settledHeightPct: state === 'collapsed' ? Math.round(40 + random() * 35) : null,
+            // Written once, at mixing; the shelf-life analysis takes a sample's latest recorded height.
+            sampleHeightMm: ageDays === 0 ? sampleHeightMm : null,
             notes: state === 'collapsed' ? 'Clear supernatant on top; network compacted.' : ageDays === 0 ? 'Just after mixing.' : null,
             observerId: random() < 0.7 ? people.scientist.id : people.scientist2.id,
             importBatchId: null,
@@ -180,7 +185,7 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
     const samples = demoAgeingSamples({ phi: recipe.phi, contactEnergyKT: recipe.derived.contactEnergyKT!, softens: recipe.particleId === latex.id }, random, scheduled.get(recipe.id));
     for (const sample of samples) {
       const observerId = random() < 0.6 ? people.scientist.id : people.scientist2.id;
-      for (const check of sample.checks) {
+      for (const [index, check] of sample.checks.entries()) {
         const collapsed = check.state === 'collapsed';
         ageingRows.push({
           programmeId: recipe.programmeId, recipeId: recipe.id, adhocPhi: null, adhocReducedB2: null, adhocDescription: null, adhocPredictedState: null,
@@ -188,6 +193,7 @@ export async function seedDemoScenario(config: Config, people: Record<string, Us
           method: (check.storageModulusPa !== null ? 'rheology' : 'visual') as ObservationMethod,
           storageModulusPa: check.storageModulusPa, yieldStressPa: null,
           settledHeightPct: collapsed ? Math.round(40 + random() * 35) : null,
+          sampleHeightMm: index === 0 ? sample.sampleHeightMm : null,
           notes: collapsed ? 'Clear supernatant on top; network compacted.' : null,
           observerId, importBatchId: null,
         });

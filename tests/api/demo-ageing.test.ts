@@ -4,6 +4,8 @@ import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { dueSamples } from '../../shared/check-schedules/due-samples';
 import { MIN_COX_EVENTS } from '../../shared/shelf-life/cox-fit-refused';
+import { fitShelfLifeModel, type ShelfLifeModelRecord } from '../../shared/shelf-life/shelf-life-model';
+import { shelfLifeCovariatesOf } from '../../shared/shelf-life/shelf-life-covariates-of';
 import { stiffeningWithAge } from '../../shared/shelf-life/stiffening-with-age';
 import { survivalRecordsFromChecks } from '../../shared/shelf-life/survival-records-from-checks';
 import { CheckSchedule, Observation, Programme, Recipe, type User } from '../../server/models';
@@ -13,8 +15,8 @@ import { startTestStack, type TestStack } from '../support/test-stack';
 
 // The demo is invented; this holds it to what the shelf-life screens need (issue: shelf life,
 // item 6): several samples per gel, enough collapses for the proportional-hazards fit (its own
-// minimum, MIN_COX_EVENTS), censored samples, gels that stiffen and one that softens, and samples
-// due for a check. Seeded inside a transaction that is rolled back, so nothing stays behind.
+// minimum, MIN_COX_EVENTS), censored samples, gels that stiffen and one that softens, samples
+// due for a check, and a fill height for every sample, so the fit uses the sample height. Seeded inside a transaction that is rolled back, so nothing stays behind.
 
 let stack: TestStack;
 let dataDir: string;
@@ -48,9 +50,11 @@ describe('the demo scenario\'s ageing bench', () => {
       const summary = programmes.map((programme) => {
         let samples = 0, collapses = 0, censored = 0, watchedRecipes = 0;
         const trends: string[] = [];
+        const modelRecords: ShelfLifeModelRecord[] = [];
         for (const recipe of recipes.filter((r) => r.programmeId === programme.id)) {
           const mine = byRecipe.get(recipe.id) ?? [];
-          const records = survivalRecordsFromChecks(mine.map((c) => ({ mixedAt: new Date(c.mixedAt).toISOString(), ageDays: c.ageDays, observedState: c.observedState })));
+          const records = survivalRecordsFromChecks(mine.map((c) => ({ observationId: c.id, mixedAt: new Date(c.mixedAt).toISOString(), ageDays: c.ageDays, observedState: c.observedState, sampleHeightMm: c.sampleHeightMm })));
+          for (const r of records) modelRecords.push({ ...r, covariates: { ...shelfLifeCovariatesOf(recipe.derived), sampleHeightMm: r.sampleHeightMm } });
           if (records.length >= 3) watchedRecipes++;
           samples += records.length;
           collapses += records.filter((r) => r.collapsed).length;
@@ -59,7 +63,14 @@ describe('the demo scenario\'s ageing bench', () => {
           const fit = stiffeningWithAge(moduli);
           if (fit.status === 'fitted') trends.push(fit.trend);
         }
-        return { code: programme.codePrefix, samples, collapses, censored, watchedRecipes, stiffens: trends.filter((t) => t === 'stiffens').length, softens: trends.filter((t) => t === 'softens').length };
+        const heights = modelRecords.map((r) => r.covariates.sampleHeightMm);
+        const model = fitShelfLifeModel(modelRecords);
+        return {
+          code: programme.codePrefix, samples, collapses, censored, watchedRecipes,
+          stiffens: trends.filter((t) => t === 'stiffens').length, softens: trends.filter((t) => t === 'softens').length,
+          heightsWithin20To80: heights.every((h) => h !== null && h !== undefined && h >= 20 && h <= 80),
+          model: model.status === 'fitted' ? model.terms.map((t) => t.key) : model.message,
+        };
       });
       console.log(`demo seeded in ${seconds.toFixed(1)} s: ${seeded.observations} observations`, summary);
       const primer = summary.find((s) => s.code === 'LPG')!;
@@ -69,6 +80,8 @@ describe('the demo scenario\'s ageing bench', () => {
         expect(programme.collapses, programme.code).toBeGreaterThanOrEqual(MIN_COX_EVENTS);
         expect(programme.censored, programme.code).toBeGreaterThanOrEqual(10);
         expect(programme.stiffens, programme.code).toBeGreaterThanOrEqual(3);
+        expect(programme.heightsWithin20To80, programme.code).toBe(true);
+        expect(programme.model, programme.code).toContain('sampleHeightMm');
       }
       expect(primer.softens + slurry.softens).toBeGreaterThanOrEqual(1);
 
