@@ -1,36 +1,31 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { can } from '@shared/permissions';
-import { Card, PageHeader } from '@/components/ui/page';
+import type { MapPoints } from '@shared/views/map-points';
+import { decodeMapRecipes } from '@shared/views/map-points';
+import type { ProgrammeView } from '@shared/views/programme';
+import { Card } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { ErrorState, Loading } from '@/components/ui/states';
-import { useSession } from '@/features/auth/api/get-session';
-import { useCalibrations } from '@/features/calibration/api/get-calibrations';
-import { SafetyNote } from '@/features/cautions/safety-note';
-import { useMapPoints } from '@/features/map/api/get-map-points';
-import { CalibrationSwitch } from '@/features/map/components/calibration-switch';
-import { MapControls } from '@/features/map/components/map-controls';
-import { MapExports } from '@/features/map/components/map-exports';
-import { MapLegend } from '@/features/map/components/map-legend';
-import { SelectionPanel } from '@/features/map/components/selection-panel';
-import { PointsTable } from '@/features/map/components/points-table';
-import { StateMap } from '@/features/map/components/state-map';
-import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '@/features/map/geometry/map-view';
-import type { MapPoint, Viewport } from '@/features/map/geometry/types';
-import type { CalibrationOverlay } from '@/features/map/geometry/calibration-lines';
-import { useCalibrationOverlay } from '@/features/map/hooks/use-calibration-overlay';
-import { placePoints, useStateMapDrawing } from '@/features/map/hooks/use-map-drawing';
-import { ProgrammeGate } from '@/features/programmes/components/programme-gate';
-import { ProgrammePicker } from '@/features/programmes/components/programme-picker';
-import { useProgrammeParam } from '@/features/programmes/hooks/use-programme-param';
-import type { MapPoints } from '@shared/views/map-points';
-import type { ProgrammeView } from '@shared/views/programme';
 import { formatDate } from '@/lib/format';
 import { useUrlParams } from '@/lib/use-url-params';
-import { decodeMapRecipes } from '@shared/views/map-points';
-import { ShelfLifeKey, ShelfLifeOverlay } from '@/features/map/components/shelf-life-overlay';
-import { shelfLifeLayer, type ShelfLifeLayer } from '@/features/map/geometry/shelf-life-layer';
+import { useCalibrations } from '@/features/calibration';
+import { SafetyNote } from '@/features/cautions';
 import { useProgrammeShelfLife } from '@/features/shelf-life';
+import { useMapPoints } from '../api/get-map-points';
+import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '../geometry/map-view';
+import type { MapPoint, Viewport } from '../geometry/types';
+import type { CalibrationOverlay } from '../geometry/calibration-lines';
+import { shelfLifeLayer, type ShelfLifeLayer } from '../geometry/shelf-life-layer';
+import { useCalibrationOverlay } from '../hooks/use-calibration-overlay';
+import { placePoints, useStateMapDrawing } from '../hooks/use-map-drawing';
+import { CalibrationSwitch } from './calibration-switch';
+import { MapControls } from './map-controls';
+import { MapExports } from './map-exports';
+import { MapLegend } from './map-legend';
+import { PointsTable } from './points-table';
+import { SelectionPanel } from './selection-panel';
+import { ShelfLifeKey, ShelfLifeOverlay } from './shelf-life-overlay';
+import { StateMap } from './state-map';
 
 function median(values: number[]) {
   if (values.length === 0) return null;
@@ -38,26 +33,12 @@ function median(values: number[]) {
   return sorted[Math.floor(sorted.length / 2)];
 }
 
-export function MapRoute() {
-  const { data: user } = useSession();
-  const selection = useProgrammeParam();
-  return (
-    <>
-      <PageHeader
-        title="State map"
-        subtitle="Where the programme's recipes sit on the state diagram computed from published theory, with what the bench observed laid over it."
-      />
-      <div className="mb-4">
-        <ProgrammePicker programmes={selection.programmes} value={selection.programmeId} onChange={selection.setProgrammeId} />
-      </div>
-      <ProgrammeGate selection={selection} canCreate={can(user?.role, 'programmes.write')}>
-        {(programme) => <ProgrammeMap programme={programme} canShortlist={can(user?.role, 'shortlists.write')} />}
-      </ProgrammeGate>
-    </>
-  );
-}
-
-function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; canShortlist: boolean }) {
+/**
+ * A programme's state map: the computed diagram with the programme's recipes and bench outcomes
+ * over it, its layers, the calibration switch, the shelf-life layer, a selection to shortlist and
+ * the points as a table. The view (axis, theory, layers, zoom) lives in the address.
+ */
+export function MapScreen({ programme, canShortlist }: { programme: ProgrammeView; canShortlist: boolean }) {
   const points = useMapPoints(programme.id);
   const calibrations = useCalibrations(programme.id);
   const inUse = calibrations.data?.inUse ?? null;
@@ -68,10 +49,10 @@ function ProgrammeMap({ programme, canShortlist }: { programme: ProgrammeView; c
   if (points.isPending || calibrations.isPending) return <Loading label="Loading the programme's points…" />;
   if (points.isError) return <ErrorState error={points.error} retry={() => points.refetch()} />;
   if (calibrations.isError) return <ErrorState error={calibrations.error} retry={() => calibrations.refetch()} />;
-  return <MapScreen programme={programme} data={points.data} canShortlist={canShortlist} calibration={calibration} />;
+  return <LoadedMap programme={programme} data={points.data} canShortlist={canShortlist} calibration={calibration} />;
 }
 
-function MapScreen({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
+function LoadedMap({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
   const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
   const recipeRows = useMemo(() => decodeMapRecipes(data), [data]);

@@ -1,39 +1,31 @@
-import { can } from '@shared/permissions';
-import { STATE_LABELS } from '@shared/states';
 import type { PlanView } from '@shared/views/plan';
 import type { ProgrammeView } from '@shared/views/programme';
+import { STATE_LABELS } from '@shared/states';
 import { Notice } from '@/components/ui/notice';
-import { Card, PageHeader } from '@/components/ui/page';
+import { Card } from '@/components/ui/page';
 import { EmptyState, ErrorState, Loading } from '@/components/ui/states';
 import { formatNumber } from '@/lib/format';
-import { useSession } from '@/features/auth/api/get-session';
-import { SafetyNote } from '@/features/cautions/safety-note';
-import { PlanMap } from '@/features/map/components/plan-map';
-import { defaultPlanInput, doseText, ExperimentList, PlanAdviceNotice, PlanCandidates, PlanForm, PlanHistory, PlanOverview, useCreatePlan, usePlan } from '@/features/planner';
-import { useLiveMaterials } from '@/features/library';
-import { ProgrammeGate, ProgrammePicker, useProgrammeParam } from '@/features/programmes';
 import { useUrlParams } from '@/lib/use-url-params';
+import { SafetyNote } from '@/features/cautions';
+import { useLiveMaterials } from '@/features/library';
+import { PlanMap } from '@/features/map';
+import { useCreatePlan } from '../api/create-plan';
+import { usePlan } from '../api/get-plan';
+import { doseText } from '../lib/plan-words';
+import { ExperimentList } from './experiment-list';
+import { PlanAdviceNotice } from './plan-advice';
+import { PlanCandidates } from './plan-candidates';
+import { PlanForm, defaultPlanInput } from './plan-form';
+import { PlanHistory } from './plan-history';
+import { PlanOverview } from './plan-overview';
 
 const PLAN_PARAM = 'plan';
 
-export function PlanRoute() {
-  const { data: user } = useSession();
-  const selection = useProgrammeParam();
-  return (
-    <>
-      <PageHeader
-        title="Planner"
-        subtitle="Start from the state you want: Gelwright searches the compositions of your materials for those predicted to reach it with room to spare, ranks them, and proposes the few samples that would teach the map most."
-        actions={<ProgrammePicker programmes={selection.programmes} value={selection.programmeId} onChange={selection.setProgrammeId} />}
-      />
-      <ProgrammeGate selection={selection} canCreate={can(user?.role, 'programmes.write')}>
-        {(programme) => <PlannerScreen key={programme.id} programme={programme} canPlan={can(user?.role, 'plans.write')} />}
-      </ProgrammeGate>
-    </>
-  );
-}
-
-function PlannerScreen({ programme, canPlan }: { programme: ProgrammeView; canPlan: boolean }) {
+/**
+ * The planner of one programme: the form (for roles that may plan), the open plan (?plan=ID) with
+ * its place on the state map, ranked candidates or advice, next experiments, and the programme's plans.
+ */
+export function PlannerScreen({ programme, canPlan }: { programme: ProgrammeView; canPlan: boolean }) {
   const [params, setParams] = useUrlParams();
   const raw = Number(params.get(PLAN_PARAM));
   const planId = Number.isInteger(raw) && raw > 0 ? raw : null;

@@ -1,34 +1,35 @@
-import { Link, useParams } from 'react-router-dom';
-import { can } from '@shared/permissions';
+import { Link } from 'react-router-dom';
 import { Button } from '@/components/ui/button';
 import { Card, PageHeader } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
 import { StateBadge } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';
 import { ApiError } from '@/lib/api-client';
-import { useSession } from '@/features/auth/api/get-session';
-import { SafetyNote } from '@/features/cautions/safety-note';
-import { RecipeMiniMap } from '@/features/map/components/recipe-mini-map';
-import { withProgramme } from '@/features/programmes/hooks/use-programme-param';
-import { useArchiveRecipe } from '@/features/recipes/api/archive-recipe';
-import { useRecipe } from '@/features/recipes/api/get-recipe';
 import { useRecipeObservations } from '@/features/bench';
-import { DerivedPanel } from '@/features/recipes/components/derived-panel';
-import { ObservationTimeline } from '@/features/recipes/components/observation-timeline';
-import { CheckScheduleForm } from '@/features/recipes/components/check-schedule-form';
-import { RecipeComposition } from '@/features/recipes/components/recipe-composition';
-import { useRecipeMap } from '@/features/recipes/hooks/use-recipe-map';
-import { useMapPoints } from '@/features/map/api/get-map-points';
-import { nearbyEvidence } from '@/features/recipes/components/nearby-evidence';
-import { BenchSurvival } from '@/features/recipes/components/bench-survival';
-import { ShelfLifePanel } from '@/features/recipes/components/shelf-life-panel';
-import { SimilarSurvival } from '@/features/recipes/components/similar-survival';
-import { CollapseDrivers } from '@/features/recipes/components/collapse-drivers';
+import { SafetyNote } from '@/features/cautions';
+import { RecipeMiniMap, useMapPoints } from '@/features/map';
+import { withProgramme } from '@/features/programmes';
 import { useProgrammeShelfLife } from '@/features/shelf-life';
+import { useArchiveRecipe } from '../api/archive-recipe';
+import { useRecipe } from '../api/get-recipe';
+import { useRecipeMap } from '../hooks/use-recipe-map';
+import { BenchSurvival } from './bench-survival';
+import { CheckScheduleForm } from './check-schedule-form';
+import { CollapseDrivers } from './collapse-drivers';
+import { DerivedPanel } from './derived-panel';
+import { nearbyEvidence } from './nearby-evidence';
+import { ObservationTimeline } from './observation-timeline';
+import { RecipeComposition } from './recipe-composition';
+import { ShelfLifePanel } from './shelf-life-panel';
+import { SimilarSurvival } from './similar-survival';
 
-export function RecipeDetailRoute() {
-  const { code = '' } = useParams();
-  const { data: user } = useSession();
+/**
+ * One recipe: where it sits and why, its shelf life on the bench and among gels like it, what
+ * drives collapse, its outcomes by age, its small map, composition and check schedule.
+ * `code` as written in the address (any case); `canWrite` edits, archives and restores it;
+ * `canSchedule` sets its check schedule.
+ */
+export function RecipeScreen({ code, canWrite, canSchedule }: { code: string; canWrite: boolean; canSchedule: boolean }) {
   const recipe = useRecipe(code.toUpperCase());
   const observations = useRecipeObservations(recipe.data?.id);
   const map = useRecipeMap(recipe.data);
@@ -38,7 +39,6 @@ export function RecipeDetailRoute() {
   if (recipe.isPending) return <Loading label="Loading the recipe…" />;
   if (recipe.isError) return recipe.error instanceof ApiError && recipe.error.status === 404 ? <Notice tone="warning" title={`No recipe has the code ${code}`}>Check the code, or <Link to="/find">search for it</Link>.</Notice> : <ErrorState error={recipe.error} retry={() => recipe.refetch()} />;
   const r = recipe.data;
-  const canWrite = can(user?.role, 'recipes.write');
   return (
     <>
       <PageHeader
@@ -118,7 +118,7 @@ export function RecipeDetailRoute() {
             <RecipeComposition recipe={r} />
           </Card>
           <Card title="Check schedule">
-            <CheckScheduleForm recipeId={r.id} canWrite={can(user?.role, 'observations.write') && !r.archived} />
+            <CheckScheduleForm recipeId={r.id} canWrite={canSchedule && !r.archived} />
           </Card>
           <SafetyNote />
         </div>

@@ -1,27 +1,27 @@
-import { Link, useParams } from 'react-router-dom';
+import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { STATE_LABELS } from '@shared/states';
 import type { ShortlistItemView, ShortlistView } from '@shared/views/shortlist';
 import { Button } from '@/components/ui/button';
 import { StateBadge } from '@/components/ui/state-badge';
 import { ErrorState, Loading } from '@/components/ui/states';
-import { formatDate, formatDateTime, formatNumber } from '@/lib/format';
 import { SymbolText } from '@/components/ui/symbol-text';
-import { SafetyNote } from '@/features/cautions/safety-note';
-import { RecipesMap } from '@/features/map/components/recipes-map';
-import { useProgramme } from '@/features/programmes';
+import { formatDate, formatDateTime, formatNumber } from '@/lib/format';
 import { useRecipeObservations } from '@/features/bench';
-import { useShortlist } from '@/features/shortlists/api/get-shortlist';
-import { DossierShelfLife, DossierShelfLifeCell } from '@/features/shortlists/components/dossier-shelf-life';
-import { Wordmark } from '../layout/wordmark';
+import { SafetyNote } from '@/features/cautions';
+import { RecipesMap } from '@/features/map';
+import { useProgramme } from '@/features/programmes';
+import { useShortlist } from '../api/get-shortlist';
+import { DossierShelfLife, DossierShelfLifeCell } from './dossier-shelf-life';
 
 /**
  * A shortlist on paper: its map, each recipe with its parameters, prediction, margin and bench
  * evidence, the calibration in use, the approval history and the cautions. Printed (or saved
- * as PDF) with the browser's own print; the screen-only controls hide themselves.
+ * as PDF) with the browser's own print; the screen-only controls hide themselves. `brand` heads
+ * the printed page (the app's wordmark).
  */
-export function ShortlistDossierRoute() {
-  const { id } = useParams();
-  const shortlist = useShortlist(Number(id));
+export function DossierScreen({ shortlistId, brand }: { shortlistId: number; brand: ReactNode }) {
+  const shortlist = useShortlist(shortlistId);
   const programme = useProgramme(shortlist.data?.programmeId ?? null);
   if (shortlist.isPending) return <Loading label="Preparing the dossier…" />;
   if (shortlist.isError) return <div className="p-8"><ErrorState error={shortlist.error} retry={() => shortlist.refetch()} /></div>;
@@ -43,7 +43,7 @@ export function ShortlistDossierRoute() {
           {s.purpose && <p className="mt-2 text-sm">{s.purpose}</p>}
         </div>
         <div className="text-right text-xs text-ink-soft">
-          <Wordmark />
+          {brand}
           <p className="mt-1">Printed {formatDateTime(new Date().toISOString())}</p>
         </div>
       </header>
