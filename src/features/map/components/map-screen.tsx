@@ -1,7 +1,5 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
-import type { MapPoints } from '@shared/views/map-points';
-import { decodeMapRecipes } from '@shared/views/map-points';
 import type { ProgrammeView } from '@shared/views/programme';
 import { Card } from '@/components/ui/page';
 import { Notice } from '@/components/ui/notice';
@@ -11,7 +9,7 @@ import { useUrlParams } from '@/lib/use-url-params';
 import { useCalibrations } from '@/features/calibration';
 import { SafetyNote } from '@/features/cautions';
 import { useProgrammeShelfLife } from '@/features/shelf-life';
-import { useMapPoints } from '../api/get-map-points';
+import { useMapPoints, type MapOverlay } from '../api/get-map-points';
 import { LAYERS, parseMapView, writeMapView, type Layer, type MapView } from '../geometry/map-view';
 import type { MapPoint, Viewport } from '../geometry/types';
 import type { CalibrationOverlay } from '../geometry/calibration-lines';
@@ -52,10 +50,10 @@ export function MapScreen({ programme, canShortlist }: { programme: ProgrammeVie
   return <LoadedMap programme={programme} data={points.data} canShortlist={canShortlist} calibration={calibration} />;
 }
 
-function LoadedMap({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapPoints; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
+function LoadedMap({ programme, data, canShortlist, calibration }: { programme: ProgrammeView; data: MapOverlay; canShortlist: boolean; calibration: CalibrationOverlay | null }) {
   const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
-  const recipeRows = useMemo(() => decodeMapRecipes(data), [data]);
+  const recipeRows = data.recipes;
   const sizeRatio = useMemo(() => median(recipeRows.map((r) => r.sizeRatio).filter((v): v is number => v !== null && v > 0)), [recipeRows]);
   const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
   const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');

@@ -5,12 +5,11 @@ import { inverseStickinessFromReducedB2 } from '@shared/physics/attraction/inver
 import { squareWellDepthFromReducedB2 } from '@shared/physics/attraction/square-well-depth-from-reduced-b2';
 import type { ClassifierParameters, MapModel, StateMap } from '@shared/physics/map/types';
 import { DEFAULT_SQUARE_WELL_RANGE } from '@shared/physics/map/resolve-map-model';
-import type { MapPoints } from '@shared/views/map-points';
 import { drawingFromStateMap, drawnY } from '../geometry/from-state-map';
 import type { MapView } from '../geometry/map-view';
 import { projectPoints } from '../geometry/project-points';
 import type { MapDrawing, MapPoint } from '../geometry/types';
-import { decodeMapRecipes } from '@shared/views/map-points';
+import type { MapOverlay } from '../api/get-map-points';
 
 export interface MapRequest {
   view: MapView;
@@ -71,12 +70,12 @@ export function axisTop(model: MapModel, strongest: MapRequest['strongest']): nu
  * Places the programme's recipes and observations on a map: a point at the map's own size
  * ratio by its polymer fraction, every other one through its B2* (extended corresponding states).
  */
-export function placePoints(map: StateMap, data: MapPoints, filter: { minAge: number | null; maxAge: number | null }): { points: MapPoint[]; skipped: number } {
+export function placePoints(map: StateMap, overlay: MapOverlay, filter: { minAge: number | null; maxAge: number | null }): { points: MapPoint[]; skipped: number } {
   const ratioOfRecipe = new Map<number, number | null>();
-  for (const r of decodeMapRecipes(data)) ratioOfRecipe.set(r.id, r.sizeRatio);
+  for (const r of overlay.recipes) ratioOfRecipe.set(r.id, r.sizeRatio);
   const cache = new Map<string, number | null>();
   return projectPoints(
-    data,
+    overlay,
     (row, recipeId) => {
       const q = recipeId !== null ? ratioOfRecipe.get(recipeId) ?? null : null;
       const cacheKey = `${row.polymerReservoir}|${q}|${row.reducedB2}`;

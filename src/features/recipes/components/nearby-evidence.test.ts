@@ -1,8 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import type { MapPoints } from '@shared/views/map-points';
 import type { RecipeDerived } from '@shared/views/recipe';
-import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '@shared/views/map-points';
+import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS, decodeMapObservations, decodeMapRecipes } from '@shared/views/map-points';
 import { nearbyEvidence } from './nearby-evidence';
+
+/** The overlay as the map query hands it over, decoded. */
+function decoded(data: MapPoints) {
+  const recipes = decodeMapRecipes(data);
+  return { recipes, observations: decodeMapObservations(data, recipes) };
+}
 
 
 function points(): MapPoints {
@@ -33,7 +39,7 @@ function points(): MapPoints {
 describe('nearbyEvidence', () => {
   it('counts only other recipes within the φ and B2* window, with their collapses and long-lived gels', () => {
     const derived = { phi: 0.1, reducedB2: -5 } as RecipeDerived;
-    const evidence = nearbyEvidence(1, derived, points());
+    const evidence = nearbyEvidence(1, derived, decoded(points()));
     // Window: Δφ ≤ 0.06 and ΔB2* ≤ max(1.5, 20 % of 5) = 1.5: only recipe 2 (Δφ 0.03, ΔB2* 0.8).
     expect(evidence).toEqual({ recipes: 1, collapsed: [{ code: 'A-0002', ageDays: 45 }], heldGels: 1 });
   });
@@ -41,6 +47,6 @@ describe('nearbyEvidence', () => {
   it('widens the B2* window for strongly attractive recipes (20 % of B2*)', () => {
     const derived = { phi: 0.1, reducedB2: -10 } as RecipeDerived;
     // ΔB2* window 2.0: recipe 4 (B2* −12) is now near, recipe 2 (−5.8) is not.
-    expect(nearbyEvidence(1, derived, points()).recipes).toBe(1);
+    expect(nearbyEvidence(1, derived, decoded(points())).recipes).toBe(1);
   });
 });

@@ -1,5 +1,4 @@
-import { decodeMapObservations, decodeMapRecipes } from '@shared/views/map-points';
-import type { MapPoints } from '@shared/views/map-points';
+import type { MapObservation, MapRecipe } from '@shared/views/map-points';
 import type { RecipeDerived } from '@shared/views/recipe';
 
 export interface NearbyEvidence {
@@ -17,17 +16,16 @@ export const NEARBY = { phi: 0.06, b2: 1.5, b2Relative: 0.2 };
  * within NEARBY of its φ and B2* (the map's universal attraction coordinate). A nearness rule
  * of our own, stated on screen; not a published criterion.
  */
-export function nearbyEvidence(recipeId: number, derived: RecipeDerived, data: MapPoints): NearbyEvidence {
+export function nearbyEvidence(recipeId: number, derived: RecipeDerived, overlay: { recipes: readonly MapRecipe[]; observations: readonly MapObservation[] }): NearbyEvidence {
   const near = new Set<number>();
-  const recipes = decodeMapRecipes(data);
-  for (const { id, phi, reducedB2: b2 } of recipes) {
+  for (const { id, phi, reducedB2: b2 } of overlay.recipes) {
     if (id === recipeId || phi === null || b2 === null || derived.reducedB2 === null) continue;
     const b2Window = Math.max(NEARBY.b2, Math.abs(derived.reducedB2) * NEARBY.b2Relative);
     if (Math.abs(phi - derived.phi) <= NEARBY.phi && Math.abs(b2 - derived.reducedB2) <= b2Window) near.add(id);
   }
   const collapsed: NearbyEvidence['collapsed'] = [];
   let heldGels = 0;
-  for (const o of decodeMapObservations(data, recipes)) {
+  for (const o of overlay.observations) {
     if (o.recipeId === null || !near.has(o.recipeId)) continue;
     if (o.observedState === 'collapsed') collapsed.push({ code: o.recipeCode ?? '', ageDays: o.ageDays });
     if (o.observedState === 'gel' && o.ageDays >= 30) heldGels++;
