@@ -4,6 +4,7 @@ import { STATE_STYLE } from '@/lib/state-style';
 import { formatNumber } from '@/lib/format';
 import { SvgSymbolText } from '@/components/ui/symbol-text';
 import { fittingLabel } from '../geometry/axis-label';
+import { markerLabelSpot, placeLineLabels, regionLabelSpots, reservedBoxes, shortLabel } from '../geometry/label-placement';
 import type { StateRegion } from '../geometry/regions';
 import type { MapScales } from '../geometry/scales';
 import type { Layer } from '../geometry/map-view';
@@ -32,98 +33,8 @@ function pathOf(points: XY[], scales: MapScales) {
     .y(([, y]) => scales.y(y))(points) ?? '';
 }
 
-interface Box {
-  x0: number;
-  y0: number;
-  x1: number;
-  y1: number;
-}
-
-/** A marker's name without its parenthesised numbers (those stay in its tooltip). */
-const shortLabel = (label: string) => label.split(' (')[0];
-
-/**
- * Where a marker's label goes: to the right of the marker, or to its left when it would run off
- * the plot; null when it fits on neither side (the marker's tooltip still names it). About 6 px
- * per character at 11 px.
- */
-function markerLabelSpot(m: { x: number; y: number; label: string }, scales: MapScales): { dx: number; anchor: 'start' | 'end'; box: Box } | null {
-  const x = scales.x(m.x);
-  const y = scales.y(m.y);
-  const width = shortLabel(m.label).length * 6;
-  if (x + 7 + width <= scales.inner.width - 2) return { dx: 7, anchor: 'start', box: { x0: x - 6, y0: y - 18, x1: x + 10 + width, y1: y + 6 } };
-  if (x - 7 - width >= 2) return { dx: -7, anchor: 'end', box: { x0: x - 10 - width, y0: y - 18, x1: x + 6, y1: y + 6 } };
-  return null;
-}
-
-/** A region's name is drawn where it fits; null when its spot is too near the edge. */
-function regionLabelSpot(region: StateRegion, scales: MapScales, avoid: Box[]): { x: number; y: number; box: Box } | null {
-  if (!region.labelAt) return null;
-  const x = scales.x(region.labelAt[0]);
-  const y0 = scales.y(region.labelAt[1]);
-  // About 7.5 px per character at 13 px semibold, centred on the spot.
-  const half = (REGION_LABEL(region.state).length * 7.5) / 2;
-  if (x < 20 || x > scales.inner.width - 20) return null;
-  // The region's own spot, or a line above or below it when a marker's label is there.
-  for (const dy of [0, 18, -18, 36, -36]) {
-    const y = y0 + dy;
-    if (y < 14 || y > scales.inner.height - 6) continue;
-    const box = { x0: x - half, y0: y - 13, x1: x + half, y1: y + 3 };
-    if (!avoid.some((b) => overlaps(b, box))) return { x, y, box };
-  }
-  return y0 >= 14 && y0 <= scales.inner.height - 6 ? { x, y: y0, box: { x0: x - half, y0: y0 - 13, x1: x + half, y1: y0 + 3 } } : null;
-}
-
-/** Each region's label spot, kept off the markers' labels. */
-function regionLabelSpots(drawing: MapDrawing, regions: StateRegion[], scales: MapScales) {
-  const markers = drawing.markers.flatMap((m) => markerLabelSpot(m, scales)?.box ?? []);
-  return new Map(regions.map((region) => [region.state, regionLabelSpot(region, scales, markers)]));
-}
-
-/** The space the marker and region labels take, kept free of line labels. */
-function reservedBoxes(drawing: MapDrawing, regionSpots: Map<string, { box: Box } | null>, scales: MapScales, layers: Set<Layer>): Box[] {
-  const boxes = drawing.markers.flatMap((m) => markerLabelSpot(m, scales)?.box ?? []);
-  if (layers.has('regions')) for (const spot of regionSpots.values()) if (spot) boxes.push(spot.box);
-  return boxes;
-}
-
-const overlaps = (a: Box, b: Box) => a.x0 < b.x1 && b.x0 < a.x1 && a.y0 < b.y1 && b.y0 < a.y1;
-
-/**
- * Places each line's label on a visible stretch of its line, trying spots along it until one
- * neither leaves the plot nor covers a label already placed; a line with no free spot goes
- * unlabelled (its name is still in the legend of lines below the map).
- */
-export function placeLineLabels(lines: { id: string; label: string; points: XY[] }[], scales: MapScales, reserved: Box[] = []) {
-  const placed: Box[] = [...reserved];
-  const out = new Map<string, { x: number; y: number; anchor: 'start' | 'end' }>();
-  const named = new Set<string>();
-  for (const line of lines) {
-    if (named.has(line.label)) continue;
-    // About 5.8 px per character at 10.5 px: the whole label must fit the spot, however long.
-    const width = line.label.length * 5.8;
-    const visible = line.points
-      .map(([x, y]) => [scales.x(x), scales.y(y)] as [number, number])
-      .filter(([px, py]) => px > 4 && py > 14 && px < scales.inner.width - 4 && py < scales.inner.height - 4);
-    const step = Math.max(1, Math.floor(visible.length / 12));
-    for (let i = Math.floor(visible.length * 0.35); i < visible.length + visible.length; i += step) {
-      const [px, py] = visible[i % Math.max(1, visible.length)] ?? [];
-      if (px === undefined) break;
-      const anchor = px + width + 6 > scales.inner.width ? 'end' : 'start';
-      const box: Box = anchor === 'start' ? { x0: px + 3, y0: py - 16, x1: px + 3 + width, y1: py - 3 } : { x0: px - 3 - width, y0: py - 16, x1: px - 3, y1: py - 3 };
-      if (box.x0 < 0 || box.y0 < 0) continue;
-      if (placed.some((b) => overlaps(b, box))) continue;
-      placed.push(box);
-      named.add(line.label);
-      out.set(line.id, { x: anchor === 'start' ? px + 3 : px - 3, y: py - 5, anchor });
-      break;
-    }
-  }
-  return out;
-}
-
 export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawing: MapDrawing; regions: StateRegion[]; scales: MapScales; layers: Set<Layer>; clipId: string }) {
-  const regionSpots = regionLabelSpots(drawing, regions, scales);
+  const regionSpots = regionLabelSpots(drawing.markers, regions, REGION_LABEL, scales);
   return (
     <>
       <defs>
@@ -175,7 +86,7 @@ export function MapLayers({ drawing, regions, scales, layers, clipId }: { drawin
             );
           })}
         {layers.has('labels') && layers.has('lines') &&
-          [...placeLineLabels(drawing.lines, scales, reservedBoxes(drawing, regionSpots, scales, layers)).entries()].map(([id, spot]) => {
+          [...placeLineLabels(drawing.lines, scales, reservedBoxes(drawing.markers, regionSpots, scales, layers.has('regions'))).entries()].map(([id, spot]) => {
             const l = drawing.lines.find((line) => line.id === id)!;
             return (
               <text key={id} x={spot.x} y={spot.y} textAnchor={spot.anchor} fontSize={10.5} fill={TONE[l.tone].stroke} paintOrder="stroke" stroke="#fbfaf7" strokeWidth={3}>
