@@ -51,7 +51,7 @@ describe('an outcome recorded on the bench log', () => {
     const pointsBefore = await page.locator('tr[data-point^="o"]').count();
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Bench log' }).click();
-    await page.getByLabel('Programme').selectOption(String(programme.id));
+    await page.getByLabel('Programme', { exact: true }).selectOption(String(programme.id));
     await page.getByRole('button', { name: 'Record an outcome' }).click();
     const form = page.getByRole('form', { name: 'Record an outcome' });
     await form.getByLabel('Find the recipe').fill(recipe.code);
@@ -67,7 +67,7 @@ describe('an outcome recorded on the bench log', () => {
     expect(recorded).not.toBeNull();
 
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'State map' }).click();
-    await page.getByLabel('Programme').selectOption(String(programme.id));
+    await page.getByLabel('Programme', { exact: true }).selectOption(String(programme.id));
     await page.getByRole('img', { name: /^State map of Fresh everywhere/ }).waitFor();
     await page.getByText(/^List the \d+ points? on this map$/).click();
     const row = page.locator(`tr[data-point="o${recorded!.id}"]`);
