@@ -12,11 +12,11 @@ import type { Recipe } from './recipe';
 export function storedAttraction(r: Recipe): RecipeAttraction {
   switch (r.attractionSource) {
     case 'depletion':
-      return { source: 'depletion', depletantId: r.depletantId!, concentrationGL: r.depletantGl! };
+      return { source: 'depletion', depletantId: r.depletantId!, concentrationGL: r.depletantConcentrationGL! };
     case 'salt':
-      return { source: 'salt', saltId: r.saltId!, concentrationMM: r.saltMm! };
+      return { source: 'salt', saltId: r.saltId!, concentrationMM: r.saltConcentrationMM! };
     case 'direct':
-      return { source: 'direct', contactEnergyKT: r.contactEnergyKt!, rangeSigma: r.rangeSigma! };
+      return { source: 'direct', contactEnergyKT: r.contactEnergyKT!, rangeSigma: r.rangeSigma! };
     default:
       return { source: 'none' };
   }
@@ -27,10 +27,10 @@ export function attractionColumns(a: RecipeAttraction) {
   return {
     attractionSource: a.source,
     depletantId: a.source === 'depletion' ? a.depletantId : null,
-    depletantGl: a.source === 'depletion' ? a.concentrationGL : null,
+    depletantConcentrationGL: a.source === 'depletion' ? a.concentrationGL : null,
     saltId: a.source === 'salt' ? a.saltId : null,
-    saltMm: a.source === 'salt' ? a.concentrationMM : null,
-    contactEnergyKt: a.source === 'direct' ? a.contactEnergyKT : null,
+    saltConcentrationMM: a.source === 'salt' ? a.concentrationMM : null,
+    contactEnergyKT: a.source === 'direct' ? a.contactEnergyKT : null,
     rangeSigma: a.source === 'direct' ? a.rangeSigma : null,
   };
 }

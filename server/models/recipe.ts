@@ -17,10 +17,10 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
   declare temperatureC: number;
   declare attractionSource: RecipeSource;
   declare depletantId: number | null;
-  declare depletantGl: number | null;
+  declare depletantConcentrationGL: number | null;
   declare saltId: number | null;
-  declare saltMm: number | null;
-  declare contactEnergyKt: number | null;
+  declare saltConcentrationMM: number | null;
+  declare contactEnergyKT: number | null;
   declare rangeSigma: number | null;
   declare notes: string | null;
   declare origin: string | null;
@@ -53,10 +53,10 @@ export class Recipe extends Model<InferAttributes<Recipe>, InferCreationAttribut
         temperatureC: { ...num(false), field: 'temperature_c' },
         attractionSource: { type: DataTypes.ENUM('depletion', 'salt', 'direct', 'none'), allowNull: false },
         depletantId: { type: DataTypes.INTEGER, allowNull: true },
-        depletantGl: { ...num(), field: 'depletant_gl' },
+        depletantConcentrationGL: { ...num(), field: 'depletant_gl' },
         saltId: { type: DataTypes.INTEGER, allowNull: true },
-        saltMm: { ...num(), field: 'salt_mm' },
-        contactEnergyKt: { ...num(), field: 'contact_energy_kt' },
+        saltConcentrationMM: { ...num(), field: 'salt_mm' },
+        contactEnergyKT: { ...num(), field: 'contact_energy_kt' },
         rangeSigma: num(),
         notes: { type: DataTypes.TEXT, allowNull: true },
         origin: { type: DataTypes.STRING(200), allowNull: true },
