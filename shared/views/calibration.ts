@@ -20,9 +20,12 @@ export interface CalibrationSummaryView {
   /** The classifier parameters the calibration sets when accepted. */
   parameters: { attractionShift: number; gelB2Threshold: number };
   fitted: CalibrationParameter[];
-  attractionShift: Estimate;
-  /** Null when the gel threshold was held at the theory's value. */
-  gelB2Threshold: Estimate | null;
+  /** The fitted values with their standard errors and intervals (`parameters` holds the numbers in use). */
+  estimates: {
+    attractionShift: Estimate;
+    /** Null when the gel threshold was held at the theory's value. */
+    gelB2Threshold: Estimate | null;
+  };
   method: CalibrationFit['fit']['method'];
   observationsUsed: number;
   /** Gel-side accuracy on the observations used, theory and calibrated. */

@@ -108,10 +108,10 @@ describe('POST /api/programmes/:id/calibrations', () => {
     expect(Date.now() - Date.parse(calibration.fittedAt)).toBeLessThan(60_000);
     expect(calibration.observationsUsed).toBe(62);
     expect(calibration.result.observations.offered).toBe(62);
-    expect(Math.abs(calibration.attractionShift.value - TRUE_SHIFT)).toBeLessThan(3 * calibration.attractionShift.standardError);
+    expect(Math.abs(calibration.estimates.attractionShift.value - TRUE_SHIFT)).toBeLessThan(3 * calibration.estimates.attractionShift.standardError);
     expect(calibration.parameters.gelB2Threshold).toBe(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold);
-    expect(Math.abs(calibration.parameters.attractionShift - calibration.attractionShift.value)).toBeLessThanOrEqual(0.0005);
-    expect(calibration.gelB2Threshold).toBeNull();
+    expect(Math.abs(calibration.parameters.attractionShift - calibration.estimates.attractionShift.value)).toBeLessThanOrEqual(0.0005);
+    expect(calibration.estimates.gelB2Threshold).toBeNull();
     expect(calibration.crossValidated.folds).toBe(5);
     expect(calibration.note).toBe('first look');
     expect(calibration.result.agreement.before.counts.flat().reduce((s, n) => s + n, 0)).toBe(62);
@@ -126,7 +126,7 @@ describe('POST /api/programmes/:id/calibrations', () => {
     expect(body.inUse).toBeNull();
     const one = await agents.viewer.agent.get(`/api/programmes/${programme.id}/calibrations/${calibration.id}`);
     expect(one.status).toBe(200);
-    expect(one.body.calibration.result.fit.attractionShift).toEqual(calibration.attractionShift);
+    expect(one.body.calibration.result.fit.attractionShift).toEqual(calibration.estimates.attractionShift);
     expect(await AuditEvent.count({ where: { action: 'calibration.fitted', entityId: String(calibration.id) } })).toBe(1);
   });
 

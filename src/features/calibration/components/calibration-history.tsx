@@ -44,8 +44,8 @@ export function CalibrationHistory({
               {c.acceptedAt && <span className="block text-xs text-ink-soft">accepted {formatDateTime(c.acceptedAt)}{c.acceptedBy ? ` by ${c.acceptedBy.name}` : ''}</span>}
               {c.endedAt && <span className="block text-xs text-ink-soft">{c.status === 'withdrawn' ? 'withdrawn' : 'replaced'} {formatDateTime(c.endedAt)}{c.endedBy ? ` by ${c.endedBy.name}` : ''}</span>}
             </Td>
-            <Td className="whitespace-nowrap text-right tabular-nums">{formatEstimate(c.attractionShift)}</Td>
-            <Td className="whitespace-nowrap text-right tabular-nums">{c.gelB2Threshold ? formatEstimate(c.gelB2Threshold) : `${c.parameters.gelB2Threshold} (held)`}</Td>
+            <Td className="whitespace-nowrap text-right tabular-nums">{formatEstimate(c.estimates.attractionShift)}</Td>
+            <Td className="whitespace-nowrap text-right tabular-nums">{c.estimates.gelB2Threshold ? formatEstimate(c.estimates.gelB2Threshold) : `${c.parameters.gelB2Threshold} (held)`}</Td>
             <Td className="text-right tabular-nums">{c.observationsUsed}</Td>
             <Td className="whitespace-nowrap text-right tabular-nums">
               {formatShare(c.crossValidated.before)} → {formatShare(c.crossValidated.after)}

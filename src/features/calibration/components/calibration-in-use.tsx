@@ -42,9 +42,9 @@ export function CalibrationInUse({
       </p>
       <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-ink-soft">
         <dt>Attraction shift</dt>
-        <dd className="tabular-nums text-ink">{formatEstimate(inUse.attractionShift)} in B2*</dd>
+        <dd className="tabular-nums text-ink">{formatEstimate(inUse.estimates.attractionShift)} in B2*</dd>
         <dt>Gel threshold</dt>
-        <dd className="tabular-nums text-ink">{inUse.gelB2Threshold ? `B2* ${formatEstimate(inUse.gelB2Threshold)}` : `B2* ${formatSigned(inUse.parameters.gelB2Threshold, 1)} (default, not fitted)`}</dd>
+        <dd className="tabular-nums text-ink">{inUse.estimates.gelB2Threshold ? `B2* ${formatEstimate(inUse.estimates.gelB2Threshold)}` : `B2* ${formatSigned(inUse.parameters.gelB2Threshold, 1)} (default, not fitted)`}</dd>
         <dt>Default</dt>
         <dd className="text-ink" data-testid="gel-threshold-default">B2* {formatSigned(DEFAULT_CLASSIFIER_PARAMETERS.gelB2Threshold, 1)}: {GEL_THRESHOLD_SOURCE}</dd>
         <dt>Fitted to</dt>

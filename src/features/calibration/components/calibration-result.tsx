@@ -37,7 +37,7 @@ export function CalibrationResult({
   const [confirming, setConfirming] = useState(false);
   const { result } = calibration;
   const leftOut = (Object.entries(result.observations.leftOut) as [LeftOutReason, number][]).filter(([, n]) => n > 0);
-  const threshold = calibration.gelB2Threshold;
+  const threshold = calibration.estimates.gelB2Threshold;
   return (
     <div className="flex flex-col gap-4 text-sm" data-testid="calibration-result">
       <div className="flex flex-wrap items-center gap-2">
@@ -52,8 +52,8 @@ export function CalibrationResult({
       <dl className="grid gap-x-6 gap-y-2 sm:grid-cols-2" aria-label="Fitted values">
         <div>
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Attraction shift (B2*)</dt>
-          <dd className="text-lg tabular-nums text-ink">{formatEstimate(calibration.attractionShift)}</dd>
-          <dd className="text-xs text-ink-soft">95 % interval {formatInterval(calibration.attractionShift)}; positive: the samples behave as more attractive than computed</dd>
+          <dd className="text-lg tabular-nums text-ink">{formatEstimate(calibration.estimates.attractionShift)}</dd>
+          <dd className="text-xs text-ink-soft">95 % interval {formatInterval(calibration.estimates.attractionShift)}; positive: the samples behave as more attractive than computed</dd>
         </div>
         <div>
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Gel threshold inside the binodal (B2*)</dt>

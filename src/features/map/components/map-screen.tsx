@@ -41,7 +41,7 @@ export function MapScreen({ programme, canShortlist }: { programme: ProgrammeVie
   const calibrations = useCalibrations(programme.id);
   const inUse = calibrations.data?.inUse ?? null;
   const calibration = useMemo<CalibrationOverlay | null>(
-    () => (inUse && inUse.acceptedAt ? { parameters: inUse.parameters, shiftStandardError: inUse.attractionShift.standardError, dateLabel: formatDate(inUse.acceptedAt) } : null),
+    () => (inUse && inUse.acceptedAt ? { parameters: inUse.parameters, shiftStandardError: inUse.estimates.attractionShift.standardError, dateLabel: formatDate(inUse.acceptedAt) } : null),
     [inUse?.id, inUse?.acceptedAt],
   );
   if (points.isPending || calibrations.isPending) return <Loading label="Loading the programme's points…" />;
