@@ -1,6 +1,7 @@
 import { useMemo, type ReactNode } from 'react';
 import type { StateMap } from '@shared/physics/map/types';
 import { PhysicsArgumentError } from '@shared/physics/validation/physics-argument-error';
+import { pickRecipeMaterials } from '@shared/pick-recipe-materials';
 import { deriveRecipe, type RecipeMaterials } from '@shared/recipe-derivation';
 import { recipeInputSchema, type RecipeInput } from '@shared/schemas/recipes';
 import type { RecipeDerived } from '@shared/views/recipe';
@@ -25,14 +26,9 @@ export function LiveDerivation({ values, renderMap }: { values: RecipeInput; ren
     const parsed = recipeInputSchema.safeParse({ ...values, name: values.name || 'preview' });
     if (!parsed.success) return { ok: false, message: `Complete the form to see the prediction: ${parsed.error.issues[0].path.join('.')} — ${parsed.error.issues[0].message}` };
     const input = parsed.data;
-    const materials: RecipeMaterials | null = (() => {
-      const particle = particles.data?.find((m) => m.id === input.particleId);
-      const solvent = solvents.data?.find((m) => m.id === input.solventId);
-      if (!particle || !solvent) return null;
-      const depletant = input.attraction.source === 'depletion' ? depletants.data?.find((m) => m.id === (input.attraction as { depletantId: number }).depletantId) ?? null : null;
-      const salt = input.attraction.source === 'salt' ? salts.data?.find((m) => m.id === (input.attraction as { saltId: number }).saltId) ?? null : null;
-      return { particle, solvent, depletant, salt };
-    })();
+    const byId = <M extends { id: number }>(rows: M[] | undefined) => (id: number) => rows?.find((m) => m.id === id);
+    const picked = pickRecipeMaterials(input, { particle: byId(particles.data), solvent: byId(solvents.data), depletant: byId(depletants.data), salt: byId(salts.data) });
+    const materials: RecipeMaterials | null = 'missing' in picked ? null : picked;
     if (!materials) return { ok: false, message: 'Loading the library…' };
     try {
       const { derived, map } = deriveRecipe(input, materials);

@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
 import type { StateMap } from '@shared/physics/map/types';
+import { pickRecipeMaterials } from '@shared/pick-recipe-materials';
 import { recipeStateMap } from '@shared/recipe-derivation';
 import type { RecipeInput } from '@shared/schemas/recipes';
 import type { RecipeView } from '@shared/views/recipe';
@@ -27,14 +28,11 @@ export function useRecipeMap(recipe: RecipeView | undefined): StateMap | null {
   const salts = useLiveMaterials('salts');
   return useMemo(() => {
     if (!recipe || !particles.data || !solvents.data || !depletants.data || !salts.data) return null;
-    const particle = particles.data.find((m) => m.id === recipe.particleId);
-    const solvent = solvents.data.find((m) => m.id === recipe.solventId);
-    if (!particle || !solvent) return null;
-    const a = recipe.attraction;
-    const depletant = a.source === 'depletion' ? depletants.data.find((m) => m.id === a.depletantId) ?? null : null;
-    const salt = a.source === 'salt' ? salts.data.find((m) => m.id === a.saltId) ?? null : null;
+    const byId = <M extends { id: number }>(rows: M[]) => (id: number) => rows.find((m) => m.id === id);
+    const picked = pickRecipeMaterials(recipe, { particle: byId(particles.data), solvent: byId(solvents.data), depletant: byId(depletants.data), salt: byId(salts.data) });
+    if ('missing' in picked) return null;
     try {
-      return recipeStateMap(recipeAsInput(recipe), { particle, solvent, depletant, salt });
+      return recipeStateMap(recipeAsInput(recipe), picked);
     } catch {
       return null;
     }
