@@ -21,6 +21,12 @@ import { BENCH_PASSWORD, seedLargeProgramme } from './seed-large';
 const root = join(dirname(fileURLToPath(import.meta.url)), '..', '..');
 const ms = (v: number) => `${v.toFixed(1)} ms`;
 const met = (ok: boolean) => (ok ? 'yes' : '**no**');
+/** The exports of the heavy-job figure in one line: how many, their answers, size and time. */
+const exportSummary = (heavy: HeavyLoadFigure) => {
+  const seconds = heavy.exports.map((e) => e.seconds).sort((a, b) => a - b);
+  const statuses = [...new Set(heavy.exports.map((e) => e.status))].join('/');
+  return `${heavy.exports.length} full exports answered ${statuses}, ${(heavy.exports[0].bytes / 2 ** 20).toFixed(1)} MB each, ${seconds[0].toFixed(1)}–${seconds[seconds.length - 1].toFixed(1)} s each`;
+};
 const cpuPerRequest = (f: LoadFigure) => (f.appCpuMsPerRequest === null ? 'n/a' : `${f.appCpuMsPerRequest.toFixed(2)} ms`);
 
 function freePort(): Promise<number> {
@@ -82,7 +88,7 @@ async function apiAndMap(options: { pan: boolean } = { pan: true }) {
     console.log('bench: growing the programme to 60,000 observations for the heavy-job figure …');
     const heavy = await healthUnderHeavyJobs({ url: app.url, programmeId: seeded.programmeId, total: 60_000, scientist, viewer, cookieOf, appCpuSeconds });
     await sequelize.close();
-    console.log(`${heavy.health.name}: p50 ${heavy.health.p50} ms, p99 ${heavy.health.p99} ms, ${heavy.health.requestsPerSecond.toFixed(0)} req/s; fit ${heavy.fit.status} in ${heavy.fit.seconds.toFixed(1)} s; exports ${heavy.exports.map((e) => `${e.status} ${(e.bytes / 2 ** 20).toFixed(1)} MB in ${e.seconds.toFixed(1)} s`).join(', ')}`);
+    console.log(`${heavy.health.name}: p50 ${heavy.health.p50} ms, p99 ${heavy.health.p99} ms, ${heavy.health.requestsPerSecond.toFixed(0)} req/s; fit ${heavy.fit.status} in ${heavy.fit.seconds.toFixed(1)} s; exports ${exportSummary(heavy)}`);
     if (!options.pan) return { figures, pan: null, heavy };
     return { figures, pan, heavy };
   } finally {
@@ -132,7 +138,7 @@ Machine: ${machine}. The machine is shared: figures vary from run to run; each r
 | physics: full generic map / depletion map / 100,000 classifications | 20 / 100 / 100 ms | see below (each line says) | see below |
 | physics: mode-coupling glass line for a map (40 levels, cold) / mean-field map / free-volume map q = 0.5 (glass line cached) | 300 / 5 / 10 ms | see below (each line says) | see below |
 | planning 10,000 candidate compositions | under 200 ms | see below (each line says) | see below |
-| \`GET /api/health\` p99 while a calibration fit on ${heavy.observations.toLocaleString('en')} observations and five full bench-log exports run (5 connections) | under 100 ms | ${heavy.health.p99} ms (p50 ${heavy.health.p50} ms; fit answered ${heavy.fit.status} after ${heavy.fit.seconds.toFixed(1)} s; exports ${heavy.exports.map((e) => `${e.status}, ${(e.bytes / 2 ** 20).toFixed(1)} MB in ${e.seconds.toFixed(1)} s`).join('; ')}) | ${met(heavy.health.p99 < 100)} |
+| \`GET /api/health\` p99 while a calibration fit on ${heavy.observations.toLocaleString('en')} observations and five full bench-log exports run (5 connections) | under 100 ms | ${heavy.health.p99} ms (p50 ${heavy.health.p50} ms; fit answered ${heavy.fit.status} after ${heavy.fit.seconds.toFixed(1)} s; five exports kept running: ${exportSummary(heavy)}) | ${met(heavy.health.p99 < 100)} |
 
 The load generator (autocannon), MariaDB and the app share the same two cores here, so the API
 figures measure that whole arrangement, not the app alone. "App CPU per request" is the app
