@@ -33,16 +33,20 @@ export interface RecipeDerived {
   calibration: { id: number; acceptedAt: string } | null;
 }
 
-export interface RecipeView {
-  id: number;
-  code: string;
-  programmeId: number;
+/** What a recipe is made of, as the form names it: the part a recipe and its snapshots share. */
+export interface RecipeComposition {
   name: string;
   particleId: number;
   solventId: number;
   fraction: { kind: 'mass' | 'volume'; value: number };
   temperatureC: number;
   attraction: RecipeAttraction;
+}
+
+export interface RecipeView extends RecipeComposition {
+  id: number;
+  code: string;
+  programmeId: number;
   notes: string | null;
   archived: boolean;
   origin: string | null;
@@ -57,15 +61,9 @@ export interface RecipeView {
  * A recipe version as its shortlist was submitted: composition, derived parameters (prediction,
  * model version and calibration among them). The shortlist shows this, not later edits.
  */
-export interface RecipeSnapshot {
+export interface RecipeSnapshot extends RecipeComposition {
   version: number;
   code: string;
-  name: string;
-  particleId: number;
-  solventId: number;
-  fraction: { kind: 'mass' | 'volume'; value: number };
-  temperatureC: number;
-  attraction: RecipeAttraction;
   derived: RecipeDerived;
   takenAt: string;
 }
