@@ -45,4 +45,8 @@ describe('server layers: routes → services → models; presenters only shape r
   it('no file under server/presenters imports from server/services', () => {
     expect(crossings('server/presenters', 'server/services')).toEqual([]);
   });
+
+  it('no file under server/models imports from routes, http, services or presenters (models are the bottom layer)', () => {
+    expect(['server/routes', 'server/http', 'server/services', 'server/presenters'].flatMap((upper) => crossings('server/models', upper))).toEqual([]);
+  });
 });

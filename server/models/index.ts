@@ -15,7 +15,7 @@ import { Plan } from './plan';
 import { PlanRecipe } from './plan-recipe';
 import { IdempotentRequest } from './idempotent-request';
 import { CheckSchedule } from './check-schedule';
-import { programmeWritten } from '../http/write-events';
+import { programmeWritten } from './write-events';
 
 export { User, UserToken, AuditEvent, OutboxMessage, Programme, ParticleSystem, Depletant, Solvent, Salt, Recipe, Observation, Attachment, ImportBatch, Shortlist, ShortlistItem, ShortlistEvent, Calibration, Plan, PlanRecipe, IdempotentRequest, CheckSchedule };
 

@@ -6,7 +6,7 @@ import type { ObservedState, PredictedState } from '../../shared/states';
 import { MAP_OBSERVATION_COLUMNS, MAP_RECIPE_COLUMNS } from '../../shared/views/map-points';
 import type { MapPoints } from '../../shared/views/map-points';
 import type { RecipeDerived } from '../../shared/views/recipe';
-import { onProgrammeWritten } from '../http/write-events';
+import { onProgrammeWritten } from '../models/write-events';
 
 const inverseTauFromB2 = (b2: number | null) => (b2 === null || b2 >= 1 ? null : inverseStickinessFromReducedB2(b2));
 /** Six significant digits: far finer than any map can show, and a third of the bytes. */

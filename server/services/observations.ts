@@ -3,7 +3,7 @@ import type { ObservationInput, ObservationListQuery } from '../../shared/schema
 import { AGREEING_OTHER_STATES } from '../../shared/states';
 import { badRequest, forbidden, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
-import { programmeWritten } from '../http/write-events';
+import { programmeWritten } from '../models/write-events';
 import { Attachment, Observation, Programme, Recipe, User } from '../models';
 import { requireLiveProgramme } from './lookups';
 import { paged } from './paging';
