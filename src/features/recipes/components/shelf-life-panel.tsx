@@ -23,16 +23,16 @@ function duration(seconds: number) {
  * Matter 14, 2485 (2002), from memory); the team's own collapse observations are the best guide.
  */
 export function ShelfLifePanel({ derived, evidence }: { derived: RecipeDerived; evidence: NearbyEvidence | null }) {
-  const [heightCm, setHeightCm] = useState(10);
+  const [heightMm, setHeightMm] = useState(100);
   const speed = derived.timescales.settlingSpeedMs;
   const peclet = derived.timescales.gravitationalPeclet;
-  const settle = speed === null || speed === 0 ? Infinity : (heightCm / 100) / Math.abs(speed);
+  const settle = speed === null || speed === 0 ? Infinity : (heightMm / 1000) / Math.abs(speed);
   const gel = derived.predictedState === 'gel';
   const onEdge = derived.margin !== null && derived.margin < 0.05;
   return (
     <section aria-label="Shelf-life indicators" className="flex flex-col gap-3 text-sm">
-      <Field label="Sample height (cm)" className="w-40">
-        {(p) => <TextInput {...p} type="number" min={0.1} step={0.5} value={heightCm} onChange={(e) => setHeightCm(Math.max(0.1, Number(e.target.value) || 0.1))} />}
+      <Field label="Sample height (mm)" className="w-40">
+        {(p) => <TextInput {...p} type="number" min={1} step={5} value={heightMm} onChange={(e) => setHeightMm(Math.max(1, Number(e.target.value) || 1))} />}
       </Field>
       <dl className="grid grid-cols-[minmax(10rem,14rem)_1fr] gap-x-4 gap-y-2">
         <dt className="text-ink-soft">Gravitational Péclet number</dt>
@@ -44,7 +44,7 @@ export function ShelfLifePanel({ derived, evidence }: { derived: RecipeDerived; 
         <dd className="tabular-nums">
           {formatNumber(speed, 3)} m/s{speed !== null && speed < 0 ? ' (the particles cream upward)' : ''}
         </dd>
-        <dt className="text-ink-soft">Time for a free particle to fall {heightCm} cm</dt>
+        <dt className="text-ink-soft">Time for a free particle to fall {heightMm} mm</dt>
         <dd>{duration(settle)}{gel ? ' — in a gel the network holds the particles up; it collapses only if the network yields or coarsens.' : ''}</dd>
         <dt className="text-ink-soft">Margin to the nearest boundary</dt>
         <dd>
