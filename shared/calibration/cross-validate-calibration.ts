@@ -1,7 +1,7 @@
 import { fitGelBoundary, type GelBoundaryFitOptions } from './fit-gel-boundary';
 import { gelSideCall } from './gel-side-call';
 import { stratifiedFolds } from './stratified-folds';
-import type { CalibrationPoint, CrossValidation } from './types';
+import type { CalibratedParameters, CalibrationPoint, CrossValidation } from './types';
 
 /**
  * k-fold cross-validated gel-side accuracy of the calibration, beside the theory's: each fold is
@@ -18,7 +18,7 @@ import type { CalibrationPoint, CrossValidation } from './types';
 export function crossValidateCalibration(
   points: CalibrationPoint[],
   options: GelBoundaryFitOptions & { folds: number; seed: number },
-  theory: { attractionShift: number; gelB2Threshold: number },
+  theory: CalibratedParameters,
 ): CrossValidation {
   const outcomes = points.map((p) => p.outcome);
   const ones = outcomes.filter((o) => o === 1).length;

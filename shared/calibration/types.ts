@@ -5,6 +5,9 @@ import type { ObservedState } from '../states';
 export const CALIBRATION_PARAMETERS = ['attractionShift', 'gelB2Threshold'] as const;
 export type CalibrationParameter = (typeof CALIBRATION_PARAMETERS)[number];
 
+/** The classifier parameters a calibration sets: the one shape of them everywhere. */
+export type CalibratedParameters = Record<CalibrationParameter, number>;
+
 /** One bench observation offered to the fit, placed by its φ and computed B2*. */
 export interface CalibrationObservation {
   id: number;
@@ -101,7 +104,7 @@ export type VerdictKind = 'generalises' | 'fits-only' | 'no-gain';
 /** Everything a calibration reports. */
 export interface CalibrationFit {
   /** The classifier parameters to use when the calibration is accepted. */
-  parameters: { attractionShift: number; gelB2Threshold: number };
+  parameters: CalibratedParameters;
   fitted: CalibrationParameter[];
   fit: GelBoundaryFit;
   observations: {

@@ -1,4 +1,4 @@
-import type { CalibrationFit, CalibrationParameter, Estimate, VerdictKind } from '../calibration/types';
+import type { CalibratedParameters, CalibrationFit, CalibrationParameter, Estimate, VerdictKind } from '../calibration/types';
 import type { PersonRef } from './person';
 
 /** A calibration's life: proposed when fitted; accepted; superseded by a later one or withdrawn. */
@@ -18,7 +18,7 @@ export interface CalibrationSummaryView {
   programmeId: number;
   status: CalibrationStatus;
   /** The classifier parameters the calibration sets when accepted. */
-  parameters: { attractionShift: number; gelB2Threshold: number };
+  parameters: CalibratedParameters;
   fitted: CalibrationParameter[];
   /** The fitted values with their standard errors and intervals (`parameters` holds the numbers in use). */
   estimates: {

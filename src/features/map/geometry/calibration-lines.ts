@@ -1,5 +1,5 @@
 import { gelBoundaryLine } from '@shared/calibration/gel-boundary-line';
-import type { GelOnset } from '@shared/calibration/types';
+import type { CalibratedParameters, GelOnset } from '@shared/calibration/types';
 import { Z_95 } from '@shared/calibration/wald-estimate';
 import { attractionToMapY } from '@shared/physics/map/attraction-to-map-y';
 import { DEFAULT_CLASSIFIER_PARAMETERS } from '@shared/physics/map/classifier-parameters';
@@ -9,7 +9,7 @@ import type { MapLine, XY } from './types';
 
 /** What the map needs of an accepted calibration. */
 export interface CalibrationOverlay {
-  parameters: { attractionShift: number; gelB2Threshold: number };
+  parameters: CalibratedParameters;
   shiftStandardError: number;
   /** e.g. "14 Mar 2026", shown in the line's label. */
   dateLabel: string;
