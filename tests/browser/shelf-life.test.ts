@@ -68,7 +68,7 @@ describe('shelf life on the recipe page', () => {
     await panel.waitFor();
     expect(await panel.textContent()).toContain('Half collapsed by 35 days');
     expect(await panel.textContent()).toContain('2 collapses in 3 samples');
-    await page.getByRole('img', { name: /still standing against age/ }).waitFor();
+    await panel.getByRole('img', { name: /this recipe's gel samples still standing against age/ }).waitFor();
     expect(await page.getByTestId('stiffening').textContent()).toMatch(/G′ rises by [\d.]+ Pa per tenfold age .*it stiffens as it ages/);
     // Gels like it: the recipe is alone in its group and its region, so both curves are its own (same figures).
     const similar = page.getByTestId('similar-survival');

@@ -1,3 +1,4 @@
+import { STATE_LABELS, type PredictedState } from '@shared/states';
 import type { ShelfLifeModel } from '@shared/shelf-life/shelf-life-model';
 import { formatNumber } from '@/lib/format';
 
@@ -6,7 +7,7 @@ import { formatNumber } from '@/lib/format';
  * intervals and readings, what it left out and why, this recipe's predicted median, or the
  * refusal in plain words; then the published physics of delayed collapse, as context only.
  */
-export function CollapseDrivers({ model, prediction, context }: { model: ShelfLifeModel; prediction: string | null; context: string }) {
+export function CollapseDrivers({ model, prediction, predictedState, context }: { model: ShelfLifeModel; prediction: string | null; predictedState: PredictedState | null; context: string }) {
   return (
     <section aria-label="What drives collapse" className="flex flex-col gap-3 text-sm" data-testid="collapse-drivers">
       {model.status === 'refused' ? (
@@ -41,7 +42,15 @@ export function CollapseDrivers({ model, prediction, context }: { model: ShelfLi
               <li key={term.key}>{term.reading.charAt(0).toUpperCase() + term.reading.slice(1)}.</li>
             ))}
           </ul>
-          {prediction && <p data-testid="collapse-prediction"><span className="text-ink-soft">For this recipe: </span>{prediction.charAt(0).toUpperCase() + prediction.slice(1)}.</p>}
+          {prediction && (
+            <p data-testid="collapse-prediction">
+              <span className="text-ink-soft">For this recipe: </span>
+              {prediction.charAt(0).toUpperCase() + prediction.slice(1)}.
+              {predictedState !== null && predictedState !== 'gel' && (
+                <span className="text-ink-soft"> It is predicted {STATE_LABELS[predictedState].toLowerCase()}, not a gel: this holds only for samples that do gel (the model learns from gel samples alone).</span>
+              )}
+            </p>
+          )}
         </>
       )}
       {model.omitted.length > 0 && (

@@ -99,7 +99,7 @@ export function RecipeScreen({ code, canWrite, canSchedule }: { code: string; ca
             ) : shelfLife.isError ? (
               <ErrorState error={shelfLife.error} retry={() => shelfLife.refetch()} />
             ) : (
-              <CollapseDrivers model={shelfLife.data.drivers} prediction={shelfLife.data.recipes[0]?.predicted?.reading ?? null} context={shelfLife.data.context} />
+              <CollapseDrivers model={shelfLife.data.drivers} prediction={shelfLife.data.recipes[0]?.predicted?.reading ?? null} predictedState={recipe.data.derived.predictedState} context={shelfLife.data.context} />
             )}
           </Card>
           <Card title="Bench outcomes by age">
