@@ -49,4 +49,8 @@ describe('server layers: routes → services → models; presenters only shape r
   it('no file under server/models imports from routes, http, services or presenters (models are the bottom layer)', () => {
     expect(['server/routes', 'server/http', 'server/services', 'server/presenters'].flatMap((upper) => crossings('server/models', upper))).toEqual([]);
   });
+
+  it('no file under server/services imports from server/presenters (routers present what services return)', () => {
+    expect(crossings('server/services', 'server/presenters')).toEqual([]);
+  });
 });

@@ -6,7 +6,6 @@ import type { DueChecksView } from '../../shared/views/check-schedules';
 import { badRequest, conflict, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
 import { CheckSchedule, Programme, Recipe, User } from '../models';
-import { presentCheckSchedule } from '../presenters/check-schedule';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -19,12 +18,12 @@ async function requireRecipe(id: number, transaction: Transaction | null, lock =
   return recipe;
 }
 
-/** The recipe's schedule (an empty list of ages when none is set). */
+/** The recipe's schedule (null when none is set) and who last set it; presentCheckSchedule shapes it. */
 export async function loadCheckSchedule(recipeId: number, transaction: Transaction | null = null) {
   await requireRecipe(recipeId, transaction);
   const schedule = await CheckSchedule.findByPk(recipeId, { transaction });
   const updater = schedule?.updatedBy ? await User.findByPk(schedule.updatedBy, { attributes: ['id', 'name'], transaction }) : null;
-  return presentCheckSchedule(recipeId, schedule ? { agesDays: agesOf(schedule.agesDays), updatedAt: schedule.updatedAt } : null, updater);
+  return { recipeId, schedule: schedule ? { agesDays: agesOf(schedule.agesDays), updatedAt: schedule.updatedAt } : null, updater };
 }
 
 /**

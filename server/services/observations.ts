@@ -8,7 +8,6 @@ import { Attachment, Observation, Programme, Recipe, User } from '../models';
 import { requireLiveProgramme } from './lookups';
 import { paged } from './paging';
 import { claimIdempotencyKey, idempotencyKeyOf, sha256 } from './idempotency';
-import { presentObservation } from '../presenters/observation';
 import { predictAdhoc } from './predictions';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
@@ -138,8 +137,9 @@ export async function createObservation(ctx: Ctx, input: ObservationInput) {
 /**
  * POST /api/observations: records the observation, once per Idempotency-Key when one is sent
  * (a retry after a lost answer gets the first answer back, marked with Idempotent-Replayed).
+ * The router passes its presenter, since the answer stored for a replay is the presented record.
  */
-export async function recordObservationOnce(ctx: Ctx, input: ObservationInput, keyHeader: string | undefined) {
+export async function recordObservationOnce<View>(ctx: Ctx, input: ObservationInput, keyHeader: string | undefined, present: (observation: Awaited<ReturnType<typeof createObservation>>) => View) {
   const key = idempotencyKeyOf(keyHeader);
   const claim = key
     ? await claimIdempotencyKey({ userId: ctx.user!.id, scope: 'observation.create', key, requestSha256: sha256(JSON.stringify(input)), what: 'observation' }, ctx.transaction)
@@ -148,7 +148,7 @@ export async function recordObservationOnce(ctx: Ctx, input: ObservationInput, k
     ctx.res.setHeader('Idempotent-Replayed', 'true');
     return claim.replay;
   }
-  const body = { observation: presentObservation(await createObservation(ctx, input)) };
+  const body = { observation: present(await createObservation(ctx, input)) };
   if (claim) await claim.settle(201, body);
   return { status: 201, body };
 }

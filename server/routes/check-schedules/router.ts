@@ -1,6 +1,7 @@
 import { checkScheduleInputSchema, dueChecksQuerySchema } from '../../../shared/schemas/check-schedules';
 import { idParamSchema } from '../../../shared/schemas/common';
 import { route } from '../../http/route';
+import { presentCheckSchedule } from '../../presenters/check-schedule';
 import { listDueChecks, loadCheckSchedule, setCheckSchedule } from '../../services/check-schedules';
 
 export const checkScheduleRoutes = [
@@ -11,7 +12,8 @@ export const checkScheduleRoutes = [
     summary: "A recipe's check schedule: the ages (days after mixing) at which its samples are looked at",
     params: idParamSchema,
     async handler({ params }) {
-      return { body: { schedule: await loadCheckSchedule(params.id) } };
+      const { recipeId, schedule, updater } = await loadCheckSchedule(params.id);
+      return { body: { schedule: presentCheckSchedule(recipeId, schedule, updater) } };
     },
   }),
   route({
@@ -22,7 +24,8 @@ export const checkScheduleRoutes = [
     params: idParamSchema,
     body: checkScheduleInputSchema,
     async handler(ctx) {
-      return { body: { schedule: await setCheckSchedule(ctx, ctx.params.id, ctx.body) } };
+      const { recipeId, schedule, updater } = await setCheckSchedule(ctx, ctx.params.id, ctx.body);
+      return { body: { schedule: presentCheckSchedule(recipeId, schedule, updater) } };
     },
   }),
   route({

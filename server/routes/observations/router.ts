@@ -66,7 +66,7 @@ export const observationRoutes = [
     summary: 'Record a bench outcome (an Idempotency-Key makes a retry safe: same key, same answer)',
     body: observationInputSchema,
     async handler(ctx) {
-      return recordObservationOnce(ctx, ctx.body, ctx.req.get('Idempotency-Key'));
+      return recordObservationOnce(ctx, ctx.body, ctx.req.get('Idempotency-Key'), presentObservation);
     },
   }),
   route({
