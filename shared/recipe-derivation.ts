@@ -36,7 +36,7 @@ export function physicsInputFor(recipe: RecipeInput, materials: RecipeMaterials,
       ...(solvent.relativePermittivity != null ? { relativePermittivity: solvent.relativePermittivity } : {}),
     },
     temperatureC: recipe.temperatureC,
-    ...(recipe.fraction.kind === 'mass' ? { particleMassFraction: recipe.fraction.value } : { particleVolumeFraction: recipe.fraction.value }),
+    fraction: recipe.fraction,
     ...(parameters ? { parameters } : {}),
   };
   const a = recipe.attraction;
@@ -57,7 +57,8 @@ export function physicsInputFor(recipe: RecipeInput, materials: RecipeMaterials,
 /** Which field of our recipe form a physics complaint is about. */
 export function recipeFieldOf(error: PhysicsArgumentError): string {
   const argument = error.argument;
-  if (argument.startsWith('particleVolumeFraction') || argument.startsWith('particleMassFraction')) return 'fraction.value';
+  if (argument === 'fraction.kind') return 'fraction.kind';
+  if (argument.startsWith('fraction.')) return 'fraction.value';
   if (argument === 'temperatureC') return 'temperatureC';
   if (argument.startsWith('particle.')) return 'particleId';
   if (argument.startsWith('solvent.')) return 'solventId';
@@ -117,7 +118,8 @@ export function recipeStateMap(recipe: RecipeInput, materials: RecipeMaterials, 
   const physics = physicsInputFor(recipe, materials, parameters);
   // The map model needs only q (or the theory), but the attraction is checked at the recipe's φ,
   // so a mass fraction is converted as deriveRecipeParameters does (clamped: that one names a bad φ).
-  const phi = physics.particleVolumeFraction ?? Math.min(0.7, volumeFractionFromMassFraction(physics.particleMassFraction ?? 0.1, physics.particle.densityGcm3, physics.solvent.densityGcm3));
+  const { kind, value } = physics.fraction;
+  const phi = kind === 'volume' ? value : Math.min(0.7, volumeFractionFromMassFraction(value, physics.particle.densityGcm3, physics.solvent.densityGcm3));
   const model = recipeAttraction(physics, phi, recipe.temperatureC + 273.15).mapModel;
   return cachedStateMap(model, mapOptions(materials, parameters));
 }

@@ -16,7 +16,7 @@ function pegRecipe(radiusNm: number, molarMassKgMol: number, concentrationGL: nu
     particle: { radiusNm, densityGcm3: 1.05 },
     solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 },
     temperatureC: 25,
-    particleVolumeFraction: phi,
+    fraction: { kind: 'volume' as const, value: phi },
     depletant: { molarMassKgMol, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGL },
   };
 }

@@ -13,7 +13,7 @@ function buildRecipe(overrides: Partial<PhysicsRecipeInput> = {}): PhysicsRecipe
     particle: { radiusNm: 100, densityGcm3: 1.05, polydispersityPct: 5, surfacePotentialMv: -25, hamakerJ: 1e-20 },
     solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 },
     temperatureC: 25,
-    particleVolumeFraction: 0.2,
+    fraction: { kind: 'volume', value: 0.2 },
     ...overrides,
   };
 }
@@ -73,7 +73,7 @@ describe('deriveRecipeParameters', () => {
   });
 
   it('converts a mass fraction to φ and treats a recipe without attraction as hard spheres', () => {
-    const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: undefined, particleMassFraction: 0.3 }));
+    const derived = deriveRecipeParameters(buildRecipe({ fraction: { kind: 'mass', value: 0.3 } }));
     expectRelative(derived.phi, (0.3 / 1.05) / (0.3 / 1.05 + 0.7 / 0.997), 1e-14);
     expect(derived.reducedB2).toBe(1);
     expect(derived.stickiness).toBeNull();
@@ -82,7 +82,7 @@ describe('deriveRecipeParameters', () => {
   });
 
   it('reports no real root of the Percus–Yevick quadratic as a warning, never as NaN', () => {
-    const derived = deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.1, theory: 'baxterPY', direct: { contactEnergyKT: 2.3, range: 0.1 } }));
+    const derived = deriveRecipeParameters(buildRecipe({ fraction: { kind: 'volume', value: 0.1 }, theory: 'baxterPY', direct: { contactEnergyKT: 2.3, range: 0.1 } }));
     expect(derived.stickiness!).toBeLessThan(0.097);
     expect(derived.warnings.some((warning) => warning.includes('no real root'))).toBe(true);
     expect(allNumbers(derived).every(Number.isFinite)).toBe(true);
@@ -111,7 +111,7 @@ describe('deriveRecipeParameters', () => {
     for (const concentrationGL of [1, 5]) {
       for (const phi of [0.4, 0.45, 0.5, 0.55, 0.6, 0.65]) {
         const recipe = buildRecipe({
-          particle: { radiusNm: 30, densityGcm3: 1.05 }, particleVolumeFraction: phi,
+          particle: { radiusNm: 30, densityGcm3: 1.05 }, fraction: { kind: 'volume', value: phi },
           depletant: { molarMassKgMol: 100, scaling: { prefactorNm: 0.0215, exponent: 0.583 }, concentrationGL: concentrationGL, concentrationBasis: 'solvent' },
         });
         try {
@@ -121,7 +121,7 @@ describe('deriveRecipeParameters', () => {
           outcomes.push('state');
         } catch (error) {
           expect(error).toBeInstanceOf(PhysicsArgumentError);
-          expect((error as PhysicsArgumentError).argument).toBe('particleVolumeFraction');
+          expect((error as PhysicsArgumentError).argument).toBe('fraction.value');
           expect((error as Error).message).toMatch(/^Particle fraction too high for this polymer: .*Use a particle fraction below φ = 0\.\d+/);
           outcomes.push('fraction');
         }
@@ -133,7 +133,7 @@ describe('deriveRecipeParameters', () => {
 
   it('names the particle fraction, not an infinite φ_p^R, where the free volume underflows (q ≈ 6.7)', () => {
     const recipe = buildRecipe({
-      particle: { radiusNm: 3, densityGcm3: 1.05 }, particleVolumeFraction: 0.5,
+      particle: { radiusNm: 3, densityGcm3: 1.05 }, fraction: { kind: 'volume', value: 0.5 },
       depletant: { molarMassKgMol: 100, radiusOfGyrationNm: 20, concentrationGL: 1 },
     });
     expect(() => deriveRecipeParameters(recipe)).toThrow(/^Particle fraction too high for this polymer/);
@@ -152,8 +152,9 @@ describe('deriveRecipeParameters', () => {
 
   it('rejects missing or out-of-range input, naming the field', () => {
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 0, densityGcm3: 1 } })), 'particle.radiusNm');
-    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleMassFraction: 0.2 })), 'particleMassFraction');
-    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particleVolumeFraction: 0.9 })), 'particleVolumeFraction');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ fraction: { kind: 'weight' as 'mass', value: 0.2 } })), 'fraction.kind');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ fraction: { kind: 'volume', value: 0.9 } })), 'fraction.value');
+    expectArgumentError(() => deriveRecipeParameters(buildRecipe({ fraction: { kind: 'mass', value: 0.99 } })), 'fraction.value (as φ)');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ temperatureC: Number.NaN })), 'temperatureC');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ depletant: { molarMassKgMol: 20, concentrationGL: 3 } })), 'depletant.radiusOfGyrationNm');
     expectArgumentError(() => deriveRecipeParameters(buildRecipe({ particle: { radiusNm: 100, densityGcm3: 1.05 }, salt: { concentrationMM: 50, valence: 1 } })), 'particle.surfacePotentialMv');

@@ -20,6 +20,7 @@ import { requirePositive } from '../validation/require-positive';
 import { requireVolumeFraction } from '../validation/require-volume-fraction';
 import { recipeAttraction } from './recipe-attraction';
 import type { RecipeDerivation, PhysicsRecipeInput } from './recipe-types';
+import { fractionArgument } from './fraction-argument';
 
 export { DEFAULT_CLOSEST_APPROACH_NM } from './recipe-attraction';
 export type { RecipeDerivation, PhysicsRecipeInput } from './recipe-types';
@@ -42,7 +43,7 @@ export type { RecipeDerivation, PhysicsRecipeInput } from './recipe-types';
  *   shared/state-map-cache.ts); without it a map is built (~10–40 ms).
  * @throws PhysicsArgumentError naming the field for missing or out-of-range input (e.g.
  *   `particle.radiusNm must be a radius in nm in (0, Infinity); got 0`).
- * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGcm3: 1.05 }, solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 }, temperatureC: 25, particleVolumeFraction: 0.2 }).diffusionM2PerS // 2.4537e-12
+ * @example deriveRecipeParameters({ particle: { radiusNm: 100, densityGcm3: 1.05 }, solvent: { viscosityMPas: 0.89002, densityGcm3: 0.997 }, temperatureC: 25, fraction: { kind: 'volume', value: 0.2 } }).diffusionM2PerS // 2.4537e-12
  */
 export function deriveRecipeParameters(input: PhysicsRecipeInput, options: { mapFor?: (model: MapModel) => StateMap } = {}): RecipeDerivation {
   if (input === null || typeof input !== 'object') throw new PhysicsArgumentError('input', 'a recipe object', input);
@@ -119,13 +120,8 @@ export function deriveRecipeParameters(input: PhysicsRecipeInput, options: { map
 }
 
 function volumeFraction(input: PhysicsRecipeInput, particleDensity: number, solventDensity: number): number {
-  const hasMass = input.particleMassFraction !== undefined;
-  const hasVolume = input.particleVolumeFraction !== undefined;
-  if (hasMass === hasVolume) {
-    throw new PhysicsArgumentError('particleMassFraction', 'given, or else particleVolumeFraction (exactly one of the two)', hasMass ? 'both given' : 'neither given');
-  }
-  const phi = hasMass
-    ? volumeFractionFromMassFraction(input.particleMassFraction as number, particleDensity, solventDensity)
-    : (input.particleVolumeFraction as number);
-  return requireVolumeFraction(hasMass ? 'particleMassFraction (as φ)' : 'particleVolumeFraction', phi, FCC_CLOSE_PACKING);
+  const { kind, value } = input.fraction;
+  if (kind !== 'mass' && kind !== 'volume') throw new PhysicsArgumentError('fraction.kind', "'mass' or 'volume'", kind);
+  const phi = kind === 'mass' ? volumeFractionFromMassFraction(value, particleDensity, solventDensity) : value;
+  return requireVolumeFraction(fractionArgument(input), phi, FCC_CLOSE_PACKING);
 }

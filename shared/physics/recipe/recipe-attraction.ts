@@ -16,6 +16,7 @@ import { requireInRange } from '../validation/require-in-range';
 import { requirePositive } from '../validation/require-positive';
 import type { PhysicsRecipeInput } from './recipe-types';
 import { requireDepletionWithinModel } from './require-depletion-within-model';
+import { fractionArgument } from './fraction-argument';
 
 /** DLVO closest surface separation used unless a recipe gives one (physics.md §2: 0.2–0.5 nm). */
 export const DEFAULT_CLOSEST_APPROACH_NM = 0.4;
@@ -89,7 +90,7 @@ export function recipeAttraction(input: PhysicsRecipeInput, phi: number, tempera
     // Before φ_p^R = φ_p/α: dense recipes with large coils leave α → 0 and the attraction unbounded.
     requireDepletionWithinModel({
       phi, q, radiusNm, radiusOfGyrationNm, concentrationGL: concentration, overlapGL: overlap, basis,
-      fractionArgument: input.particleMassFraction !== undefined ? 'particleMassFraction (as φ)' : 'particleVolumeFraction',
+      fractionArgument: fractionArgument(input),
     });
     const perSample = basis === 'solvent' ? concentration * (1 - phi) : concentration;
     const systemPolymer = perSample / overlap;

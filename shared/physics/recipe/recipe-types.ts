@@ -2,7 +2,8 @@ import type { ClassifierParameters, MapModel, PredictedState, BoundaryId } from 
 
 /**
  * Material properties and composition of a recipe, in the units the library stores.
- * Give exactly one of particleMassFraction and particleVolumeFraction. The attraction comes from
+ * The particles' share of the sample is `fraction`: a mass fraction or a volume fraction φ, as the
+ * recipe form gives it. The attraction comes from
  * `direct` if given, else from `depletant`, else from `salt` (DLVO), else none (hard spheres).
  */
 export interface PhysicsRecipeInput {
@@ -23,8 +24,8 @@ export interface PhysicsRecipeInput {
     relativePermittivity?: number;
   };
   temperatureC: number;
-  particleMassFraction?: number;
-  particleVolumeFraction?: number;
+  /** The particles' share of the sample: by mass (converted to φ with the two densities) or by volume (φ). */
+  fraction: { kind: 'mass' | 'volume'; value: number };
   depletant?: {
     molarMassKgMol: number;
     /** R_g in nm, or else `scaling`: R_g = prefactorNm · M^exponent with M in g/mol. */

@@ -12,7 +12,7 @@ import { requireDepletionWithinModel, type DepletionRecipeFacts } from './requir
 function buildFacts(overrides: Partial<DepletionRecipeFacts> = {}): DepletionRecipeFacts {
   return {
     phi: 0.3, q: 17.7 / 30, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGL: 1,
-    overlapGL: 7.14892414992993, basis: 'solvent', fractionArgument: 'particleVolumeFraction', ...overrides,
+    overlapGL: 7.14892414992993, basis: 'solvent', fractionArgument: 'fraction.value', ...overrides,
   };
 }
 
@@ -52,7 +52,7 @@ describe('requireDepletionWithinModel', () => {
 
   it('names the particle fraction when the free volume runs out, with the largest φ that fits', () => {
     const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ phi: 0.55 })));
-    expect(error.argument).toBe('particleVolumeFraction');
+    expect(error.argument).toBe('fraction.value');
     // U(φ = 0.55, 1 g/L per solvent) = 1593.83 kT and φ_max = 0.530749 (derived, depletion_recipe_limits).
     expect(error.message).toContain('1594 kT');
     expect(error.message).toContain('below φ = 0.531');
@@ -69,8 +69,8 @@ describe('requireDepletionWithinModel', () => {
 
   it('explains an underflowing free volume in finite words, naming the fraction field it came from', () => {
     // 3 nm particles with 20 nm coils (q ≈ 6.7) at φ = 0.5: the case that used to report "got Infinity".
-    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ phi: 0.5, q: 20 / 3, radiusNm: 3, radiusOfGyrationNm: 20, overlapGL: 1.3, fractionArgument: 'particleMassFraction (as φ)' })));
-    expect(error.argument).toBe('particleMassFraction (as φ)');
+    const error = thrownBy(() => requireDepletionWithinModel(buildFacts({ phi: 0.5, q: 20 / 3, radiusNm: 3, radiusOfGyrationNm: 20, overlapGL: 1.3, fractionArgument: 'fraction.value (as φ)' })));
+    expect(error.argument).toBe('fraction.value (as φ)');
     expect(error.message).toMatch(/about 10\^\d+ kT/);
     expect(error.message).not.toMatch(/NaN|Infinity/);
   });

@@ -16,7 +16,7 @@ export interface DepletionRecipeFacts {
   concentrationGL: number;
   overlapGL: number;
   basis: ConcentrationBasis;
-  /** The recipe field φ came from, e.g. 'particleVolumeFraction' or 'particleMassFraction (as φ)'. */
+  /** The recipe field φ came from, e.g. 'fraction.value' or 'fraction.value (as φ)' (a mass fraction). */
   fractionArgument: string;
 }
 
@@ -33,7 +33,7 @@ export interface DepletionRecipeFacts {
  *
  * @throws OutsideModelError (a PhysicsArgumentError) naming 'depletant.concentrationGL' or the
  *   fraction argument, with a plain-words message.
- * @example requireDepletionWithinModel({ phi: 0.55, q: 0.59, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGL: 1, overlapGL: 7.2, basis: 'solvent', fractionArgument: 'particleVolumeFraction' })
+ * @example requireDepletionWithinModel({ phi: 0.55, q: 0.59, radiusNm: 30, radiusOfGyrationNm: 17.7, concentrationGL: 1, overlapGL: 7.2, basis: 'solvent', fractionArgument: 'fraction.value' })
  * // throws: 'Particle fraction too high for this polymer: …'
  */
 export function requireDepletionWithinModel(facts: DepletionRecipeFacts): void {
