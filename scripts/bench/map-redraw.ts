@@ -1,14 +1,10 @@
 import { chromium } from 'playwright-core';
+import { median as simpleMedian, quantile as simpleQuantile } from 'simple-statistics';
 import { BENCH_PASSWORD } from './seed-large';
 
-const median = (values: number[]) => {
-  const sorted = values.slice().sort((a, b) => a - b);
-  return sorted.length ? sorted[Math.floor(sorted.length / 2)] : NaN;
-};
-const quantile = (values: number[], q: number) => {
-  const sorted = values.slice().sort((a, b) => a - b);
-  return sorted.length ? sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] : NaN;
-};
+// simple-statistics throws on an empty list; a run that drew nothing reports NaN.
+const median = (values: number[]) => (values.length ? simpleMedian(values) : NaN);
+const quantile = (values: number[], p: number) => (values.length ? simpleQuantile(values, p) : NaN);
 
 /**
  * Pans the state map of a large programme in Debian's Chromium. The page records each redraw:

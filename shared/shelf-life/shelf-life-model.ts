@@ -1,3 +1,4 @@
+import { median } from 'simple-statistics';
 import { breslowBaselineHazard, type BaselineHazard } from './breslow-baseline-hazard';
 import { CoxFitRefused, MIN_COX_EVENTS, type CoxRefusalReason } from './cox-fit-refused';
 import { coxProportionalHazards, type CoxCovariate, type CoxTerm } from './cox-proportional-hazards';
@@ -139,12 +140,6 @@ export function describePrediction(model: ShelfLifeModelFitted, medianDays: numb
     : `the model predicts half collapsed by ${medianDays} days`;
   const height = model.typical.sampleHeightMm;
   return height === undefined ? words : `${words}, for a sample filled to the programme's typical ${Number(height.toPrecision(3))} mm`;
-}
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  const mid = Math.floor(sorted.length / 2);
-  return sorted.length % 2 ? sorted[mid] : (sorted[mid - 1] + sorted[mid]) / 2;
 }
 
 /** Published physics of delayed collapse, shown beside the fitted model as context (not as the model). */
