@@ -19,17 +19,12 @@ import { placePoints, useStateMapDrawing } from '../hooks/use-map-drawing';
 import { CalibrationSwitch } from './calibration-switch';
 import { MapControls } from './map-controls';
 import { MapExports } from './map-exports';
+import { middleSizeRatio } from '../geometry/middle-size-ratio';
 import { MapLegend } from './map-legend';
 import { PointsTable } from './points-table';
 import { SelectionPanel } from './selection-panel';
 import { ShelfLifeKey, ShelfLifeOverlay } from './shelf-life-overlay';
 import { StateMap } from './state-map';
-
-function median(values: number[]) {
-  if (values.length === 0) return null;
-  const sorted = values.slice().sort((a, b) => a - b);
-  return sorted[Math.floor(sorted.length / 2)];
-}
 
 /**
  * A programme's state map: the computed diagram with the programme's recipes and bench outcomes
@@ -54,7 +49,7 @@ function LoadedMap({ programme, data, canShortlist, calibration }: { programme: 
   const [params, setParams] = useUrlParams();
   const navigate = useNavigate();
   const recipeRows = data.recipes;
-  const sizeRatio = useMemo(() => median(recipeRows.map((r) => r.sizeRatio).filter((v): v is number => v !== null && v > 0)), [recipeRows]);
+  const sizeRatio = useMemo(() => middleSizeRatio(recipeRows.map((r) => r.sizeRatio).filter((v): v is number => v !== null)), [recipeRows]);
   const depletion = programme.attractionSource === 'depletion' && sizeRatio !== null;
   const view = parseMapView(params, depletion ? 'polymerReservoir' : 'b2');
   // Every change is applied to the newest parameters (useUrlParams), not to this render's view:

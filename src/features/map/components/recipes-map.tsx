@@ -7,13 +7,15 @@ import { DEFAULT_LAYERS, type Layer } from '../geometry/map-view';
 import type { MapPoint } from '../geometry/types';
 import { axisTop } from '../hooks/use-map-drawing';
 import { StaticStateMap } from './state-map';
+import { middleSizeRatio } from '../geometry/middle-size-ratio';
 
 const LAYERS = new Set<Layer>(DEFAULT_LAYERS);
 
 /** The map a group of recipes shares: the free-volume map at their median q, else the generic B2* map. */
 function sharedModel(recipes: { derived: RecipeDerived }[]): MapModel {
-  const ratios = recipes.map((r) => r.derived.sizeRatio).filter((q): q is number => q !== null && q > 0).sort((a, b) => a - b);
-  if (ratios.length && ratios.length === recipes.length) return { kind: 'depletion', q: Number(ratios[Math.floor(ratios.length / 2)].toPrecision(3)) };
+  const ratios = recipes.map((r) => r.derived.sizeRatio).filter((q): q is number => q !== null && q > 0);
+  const q = ratios.length === recipes.length ? middleSizeRatio(ratios) : null;
+  if (q !== null) return { kind: 'depletion', q: Number(q.toPrecision(3)) };
   return { kind: 'generic', theory: 'meanField', axis: 'b2' };
 }
 
