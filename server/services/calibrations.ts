@@ -4,7 +4,7 @@ import { observationColumns, type BenchForFit, type ObservationRowForFit } from 
 import type { CalibrationFit } from '../../shared/calibration/types';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import { PHYSICS_MODEL_VERSION, PhysicsArgumentError } from '../../shared/physics';
-import { deriveRecipe, type RecipeMaterials } from '../../shared/recipe-derivation';
+import { deriveRecipe } from '../../shared/recipe-derivation';
 import type { CalibrationFitInput } from '../../shared/schemas/calibrations';
 import type { PredictionRecompute } from '../../shared/views/calibration';
 import { conflict, HttpError, notFound } from '../errors';
@@ -14,7 +14,7 @@ import { recipeInputOf } from '../models/recipe-shapes';
 import { requireProgramme } from './lookups';
 import { inOwnTransaction } from './own-transaction';
 import { adhocPrediction, programmeParameters } from './predictions';
-import { materialsOfRecipes, type LoadedMaterials } from './recipe-materials';
+import { materialsOfRecipes, plainMaterials, type LoadedMaterials } from './recipe-materials';
 
 type Ctx = HandlerContext<unknown, unknown, unknown>;
 
@@ -43,7 +43,7 @@ export async function loadCalibration(programmeId: number, id: number, transacti
 }
 
 /** The library rows of each recipe by its id, or null when one of them no longer exists. */
-async function materialsByRecipe(recipes: Recipe[], transaction: Transaction | null): Promise<Map<number, RecipeMaterials | null>> {
+async function materialsByRecipe(recipes: Recipe[], transaction: Transaction | null): Promise<Map<number, LoadedMaterials | null>> {
   const found = await materialsOfRecipes(recipes.map(recipeInputOf), transaction);
   return new Map(recipes.map((r, i) => [r.id, 'missing' in found[i] ? null : (found[i] as LoadedMaterials)]));
 }
@@ -60,7 +60,6 @@ const FIT_READ_PAGE_ROWS = 5000;
 export async function benchForFit(programmeId: number, transaction: Transaction | null): Promise<BenchForFit> {
   const recipes = await Recipe.findAll({ where: { programmeId, archivedAt: null }, transaction });
   const materials = await materialsByRecipe(recipes, transaction);
-  const plain = <T extends object>(row: T | null | undefined) => (row ? ((row as unknown as { get(o: { plain: true }): T }).get({ plain: true })) : null);
   const rows: ObservationRowForFit[] = [];
   for (let lastId = 0; ; ) {
     const page = (await Observation.findAll({
@@ -81,7 +80,7 @@ export async function benchForFit(programmeId: number, transaction: Transaction 
       return {
         id: recipe.id,
         input: recipeInputOf(recipe),
-        materials: m ? { particle: plain(m.particle)!, solvent: plain(m.solvent)!, depletant: plain(m.depletant), salt: plain(m.salt) } : null,
+        materials: m ? plainMaterials(m) : null,
         phi: recipe.derived.phi,
         reducedB2: recipe.derived.reducedB2,
       };

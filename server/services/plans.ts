@@ -1,33 +1,18 @@
 import { Op, Sequelize, type Transaction } from 'sequelize';
-import { PhysicsArgumentError, PHYSICS_MODEL_VERSION, resolveClassifierParameters, type ClassifierParameters } from '../../shared/physics';
-import {
-  compositionSpace,
-  DEFAULT_BOUNDARY_UNCERTAINTY,
-  DEFAULT_RANKING_WEIGHTS,
-  materialCostPerLitre,
-  planCompositions,
-  plannedRecipeInput,
-  type BoundaryUncertainty,
-  type CompositionSpace,
-  type EvidenceInput,
-  type PlanTemplate,
-  type ValueRange,
-} from '../../shared/planning';
-import { recipeFieldOf } from '../../shared/recipe-derivation';
+import { PHYSICS_MODEL_VERSION } from '../../shared/physics';
+import { DEFAULT_BOUNDARY_UNCERTAINTY, type BoundaryUncertainty } from '../../shared/planning';
 import type { PlanListQuery, PlanRequest } from '../../shared/schemas/plans';
-import { STATE_LABELS, type ObservedState } from '../../shared/states';
+import { STATE_LABELS } from '../../shared/states';
 import type { PlanPrice } from '../../shared/views/plan';
-import type { RecipeDerived } from '../../shared/views/recipe';
 import { badRequest, notFound } from '../errors';
 import type { HandlerContext } from '../http/route';
-import { Calibration, Depletant, ParticleSystem, Plan, PlanRecipe, Recipe, Salt, Solvent, User } from '../models';
+import { Calibration, Plan, PlanRecipe, Recipe, User } from '../models';
 import type { LoadedPlan, StoredPlanOutcome } from '../models/plan';
 import { requireProgramme } from './lookups';
 import { paged } from './paging';
-import { decodeMapObservations, decodeMapRecipes } from '../../shared/views/map-points';
 import { buildMapPoints } from './map-points';
 import { programmeParameters } from './predictions';
-import { materialsOfRecipe } from './recipe-materials';
+import { materialsOfRecipe, plainMaterials } from './recipe-materials';
 import { HeavyJobFailed, runInWorker, withHeavyJobSlot } from './heavy-jobs';
 import { inOwnTransaction } from './own-transaction';
 import type { PlanJob } from './plan-compute';
@@ -52,14 +37,6 @@ async function boundaryUncertainty(calibration: { id: number } | null, transacti
 const price = (override: number | null | undefined, library: number | null): PlanPrice =>
   override !== undefined && override !== null ? { pricePerKg: override, source: 'plan' } : library !== null ? { pricePerKg: library, source: 'library' } : { pricePerKg: null, source: 'none' };
 
-function physicsProblem(error: unknown): never {
-  if (error instanceof PhysicsArgumentError) {
-    const field = recipeFieldOf(error);
-    throw badRequest(`${field}: ${error.message}`, field);
-  }
-  throw error;
-}
-
 /**
  * Runs the planner for a request and stores the plan: the materials from the library (400 naming
  * the field that points nowhere), the programme's accepted calibration (programmeParameters, the
@@ -79,10 +56,9 @@ export async function runPlan(ctx: Ctx, input: PlanRequest) {
     polymer: kind === 'polymer' ? price(input.prices?.depletant, materials.depletant!.pricePerKg) : null,
     salt: kind === 'salt' ? price(input.prices?.salt, materials.salt!.pricePerKg) : null,
   };
-  const plain = <T extends { get: (options: { plain: true }) => unknown } | null>(row: T) => (row ? row.get({ plain: true }) : null);
   const job: PlanJob = {
     input,
-    materials: { particle: plain(materials.particle), solvent: plain(materials.solvent), depletant: plain(materials.depletant), salt: plain(materials.salt) } as PlanJob['materials'],
+    materials: plainMaterials(materials) as PlanJob['materials'],
     parameters,
     calibration,
     uncertainty,

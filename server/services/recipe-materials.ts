@@ -35,3 +35,16 @@ export async function materialsOfRecipe(choice: MaterialChoice, transaction: Tra
   if ('missing' in found) throw badRequest(`${found.missing.field}: ${found.missing.message}`, found.missing.field);
   return found;
 }
+
+/**
+ * Library rows as plain objects, as a heavy-job worker receives them: a model instance keeps its
+ * values behind getters, which the structured clone to a worker thread does not carry.
+ */
+export function plainMaterials(m: LoadedMaterials) {
+  return {
+    particle: m.particle.get({ plain: true }),
+    solvent: m.solvent.get({ plain: true }),
+    depletant: m.depletant ? m.depletant.get({ plain: true }) : null,
+    salt: m.salt ? m.salt.get({ plain: true }) : null,
+  };
+}

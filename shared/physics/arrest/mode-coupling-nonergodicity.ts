@@ -1,5 +1,4 @@
 import { baxterLambdaUnchecked } from '../fluid-fluid/baxter-py-lambda';
-import { requireInRange } from '../validation/require-in-range';
 import { requireStickiness } from '../validation/require-stickiness';
 import { requireVolumeFraction } from '../validation/require-volume-fraction';
 import { DEFAULT_MODE_COUPLING_GRID, modeCouplingGrid, type ModeCouplingGrid } from './mode-coupling-grid';

@@ -1,5 +1,5 @@
 import { brentRoot } from '../numerics/brent-root';
-import { envelopeCoexistence, type PhaseBranch } from '../numerics/two-phase-coexistence';
+import { envelopeCoexistence } from '../numerics/two-phase-coexistence';
 import { freeVolumeSolidBranch } from './free-volume-branches';
 import { freeVolumeFluidPieces } from './free-volume-fluid-pieces';
 import { requireReservoirPolymer, requireSizeRatio } from './free-volume-limits';
